@@ -1,0 +1,181 @@
+using System.Runtime.CompilerServices;
+using System.Text;
+
+namespace CutSheet.Language.Units;
+
+/// <summary>
+/// The exponents of a quantity: the seven SI base dimensions (ISO 80000-1) followed by
+/// the "soft" dimension-one factors the trade keeps track of — plane angle (rad) and the
+/// counted entities rev, tooth, start, cycle, div and stroke. Soft factors have dimension
+/// one in SI, so they never block arithmetic; they let the checker tell a lead (mm/rev)
+/// from a pitch (mm), a rotational frequency (rev/min) from an angular velocity (rad/s),
+/// and apply the 2π bridge only where the user asks for it with <c>as</c>.
+/// </summary>
+public readonly struct Dimension : IEquatable<Dimension>
+{
+    public const int Count = 14;
+    public const int SiCount = 7;
+
+    public const int Length = 0, Mass = 1, Time = 2, Current = 3, Temperature = 4, Amount = 5, Luminosity = 6;
+    public const int Angle = 7, Rev = 8, Tooth = 9, Start = 10, Cycle = 11, Division = 12, Stroke = 13;
+
+    private static readonly string[] SiSymbols = ["L", "M", "T", "I", "Θ", "N", "J"];
+    private static readonly string[] SoftNames = ["rad", "rev", "tooth", "start", "cycle", "div", "stroke"];
+
+    private readonly Exponents _e;
+
+    public static readonly Dimension None = default;
+
+    private Dimension(Exponents e) => _e = e;
+
+    public sbyte this[int index] => _e[index];
+
+    public static Dimension Of(int index, int exponent = 1)
+    {
+        var e = new Exponents();
+        e[index] = (sbyte)exponent;
+        return new Dimension(e);
+    }
+
+    public static Dimension FromSi(int l, int m, int t, int i = 0, int th = 0, int n = 0, int j = 0)
+    {
+        var e = new Exponents();
+        e[0] = (sbyte)l; e[1] = (sbyte)m; e[2] = (sbyte)t; e[3] = (sbyte)i; e[4] = (sbyte)th; e[5] = (sbyte)n; e[6] = (sbyte)j;
+        return new Dimension(e);
+    }
+
+    public static Dimension operator *(Dimension a, Dimension b)
+    {
+        var e = new Exponents();
+        for (int k = 0; k < Count; k++) e[k] = (sbyte)(a._e[k] + b._e[k]);
+        return new Dimension(e);
+    }
+
+    public static Dimension operator /(Dimension a, Dimension b)
+    {
+        var e = new Exponents();
+        for (int k = 0; k < Count; k++) e[k] = (sbyte)(a._e[k] - b._e[k]);
+        return new Dimension(e);
+    }
+
+    public Dimension Pow(int n)
+    {
+        var e = new Exponents();
+        for (int k = 0; k < Count; k++) e[k] = (sbyte)(_e[k] * n);
+        return new Dimension(e);
+    }
+
+    /// <summary>Raises to p/q; false when an exponent would not stay an integer.</summary>
+    public bool TryPow(int p, int q, out Dimension result)
+    {
+        var e = new Exponents();
+        for (int k = 0; k < Count; k++)
+        {
+            int v = _e[k] * p;
+            if (v % q != 0 || Math.Abs(v / q) > 100) { result = default; return false; }
+            e[k] = (sbyte)(v / q);
+        }
+        result = new Dimension(e);
+        return true;
+    }
+
+    /// <summary>The same dimension with every soft factor removed (its SI part).</summary>
+    public Dimension Si
+    {
+        get
+        {
+            var e = new Exponents();
+            for (int k = 0; k < SiCount; k++) e[k] = _e[k];
+            return new Dimension(e);
+        }
+    }
+
+    public bool IsDimensionless => SiEquals(None);
+
+    public bool IsNone
+    {
+        get
+        {
+            for (int k = 0; k < Count; k++) if (_e[k] != 0) return false;
+            return true;
+        }
+    }
+
+    public bool HasSoft
+    {
+        get
+        {
+            for (int k = SiCount; k < Count; k++) if (_e[k] != 0) return true;
+            return false;
+        }
+    }
+
+    /// <summary>Rotation content: the angle exponent plus the revolution exponent.</summary>
+    public int RotationOrder => _e[Angle] + _e[Rev];
+
+    public bool SiEquals(Dimension other)
+    {
+        for (int k = 0; k < SiCount; k++) if (_e[k] != other._e[k]) return false;
+        return true;
+    }
+
+    public bool Equals(Dimension other)
+    {
+        for (int k = 0; k < Count; k++) if (_e[k] != other._e[k]) return false;
+        return true;
+    }
+
+    public override bool Equals(object? obj) => obj is Dimension d && Equals(d);
+
+    public override int GetHashCode()
+    {
+        var h = new HashCode();
+        for (int k = 0; k < Count; k++) h.Add(_e[k]);
+        return h.ToHashCode();
+    }
+
+    public static bool operator ==(Dimension a, Dimension b) => a.Equals(b);
+    public static bool operator !=(Dimension a, Dimension b) => !a.Equals(b);
+
+    /// <summary>The SI part as ISO 80000-1 dimension symbols, e.g. <c>L M T⁻²</c>; "1" for dimension one.</summary>
+    public string ToSiString()
+    {
+        var sb = new StringBuilder();
+        for (int k = 0; k < SiCount; k++)
+        {
+            if (_e[k] == 0) continue;
+            if (sb.Length > 0) sb.Append(' ');
+            sb.Append(SiSymbols[k]);
+            if (_e[k] != 1) sb.Append(Superscript.Of(_e[k]));
+        }
+        return sb.Length == 0 ? "1" : sb.ToString();
+    }
+
+    /// <summary>The soft part, e.g. <c>rev⁻¹</c>, or empty.</summary>
+    public string ToSoftString()
+    {
+        var sb = new StringBuilder();
+        for (int k = SiCount; k < Count; k++)
+        {
+            if (_e[k] == 0) continue;
+            if (sb.Length > 0) sb.Append(' ');
+            sb.Append(SoftNames[k - SiCount]);
+            if (_e[k] != 1) sb.Append(Superscript.Of(_e[k]));
+        }
+        return sb.ToString();
+    }
+
+    public override string ToString()
+    {
+        string soft = ToSoftString();
+        return soft.Length == 0 ? ToSiString() : ToSiString() + " · " + soft;
+    }
+
+    public static string SoftName(int index) => SoftNames[index - SiCount];
+
+    [InlineArray(Count)]
+    private struct Exponents
+    {
+        private sbyte _element0;
+    }
+}
