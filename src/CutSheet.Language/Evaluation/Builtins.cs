@@ -1,0 +1,283 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+using CutSheet.Language.Units;
+
+namespace CutSheet.Language.Evaluation;
+
+/// <summary>
+/// The built-in constants and functions. Trigonometric functions take angles (a plain number
+/// is radians, a revolution count is 2π per revolution); inverse functions return angles.
+/// </summary>
+internal static class Builtins
+{
+    /// <summary>π; g_n = 9.806 65 m/s² (standard acceleration of gravity, ISO 80000-3, exact).</summary>
+    public static readonly IReadOnlyDictionary<string, Quantity> Constants = new Dictionary<string, Quantity>(StringComparer.Ordinal)
+    {
+        ["pi"] = new(Math.PI, Dimension.None),
+        ["π"] = new(Math.PI, Dimension.None),
+        ["g_n"] = new(9.80665, Dimension.FromSi(1, 0, -2)),
+    };
+
+    /// <summary>Name, signature and one-line description of each built-in function, for docs and completion.</summary>
+    public static readonly (string Name, string Signature, string Description)[] Functions =
+    [
+        ("sin", "sin(angle)", "sine of an angle (a revolution count is 2π per revolution)"),
+        ("cos", "cos(angle)", "cosine of an angle"),
+        ("tan", "tan(angle)", "tangent of an angle"),
+        ("asin", "asin(ratio): plane_angle", "inverse sine, an angle"),
+        ("acos", "acos(ratio): plane_angle", "inverse cosine, an angle"),
+        ("atan", "atan(ratio): plane_angle", "inverse tangent, an angle"),
+        ("atan2", "atan2(y, x): plane_angle", "angle of the point (x, y); y and x of one dimension"),
+        ("sqrt", "sqrt(x)", "square root; every dimension exponent must be even"),
+        ("cbrt", "cbrt(x)", "cube root; every dimension exponent must divide by 3"),
+        ("abs", "abs(x)", "absolute value"),
+        ("min", "min(a, b, …) or min(list)", "smallest value; all of one dimension"),
+        ("max", "max(a, b, …) or max(list)", "largest value; all of one dimension"),
+        ("exp", "exp(ratio)", "e to the power of a plain number"),
+        ("ln", "ln(ratio)", "natural logarithm of a positive plain number"),
+        ("log10", "log10(ratio)", "decimal logarithm of a positive plain number"),
+        ("round", "round(x, step)", "x rounded to a multiple of step (half away from zero)"),
+        ("sum", "sum(list)", "sum of a list"),
+        ("mean", "mean(list)", "arithmetic mean of a list"),
+        ("rms", "rms(list)", "root mean square of a list"),
+        ("count", "count(list)", "number of values in a list"),
+        ("power_mean", "power_mean(list, p)", "(Σ xᵢᵖ / n)^(1/p), e.g. the cubic mean of a load spectrum"),
+    ];
+
+    public static IEnumerable<string> FunctionNames => Functions.Select(f => f.Name);
+
+    public static bool IsFunction(string name) => Array.Exists(Functions, f => f.Name == name);
+
+    public static Value Call(string name, Value[] args, CallSyntax call, out (string Code, TextSpan Span, string Message)? problem)
+    {
+        problem = null;
+        var span = call.Span;
+        (string, TextSpan, string) Fail(string code, TextSpan at, string message) => (code, at, message);
+        TextSpan ArgSpan(int i) => i < call.Arguments.Count ? call.Arguments[i].Value.Span : span;
+
+        int expected = name switch
+        {
+            "atan2" or "round" or "power_mean" => 2,
+            "min" or "max" => -1,
+            _ => 1,
+        };
+        if (expected >= 0 && args.Length != expected)
+        {
+            problem = Fail(DiagnosticCodes.ArgumentList, span, expected > args.Length
+                ? DiagnosticMessages.MissingArgument(name, $"{args.Length + 1}")
+                : DiagnosticMessages.TooManyArguments(name, expected));
+            return Value.Unknown;
+        }
+        if (expected < 0 && args.Length == 0)
+        {
+            problem = Fail(DiagnosticCodes.ArgumentList, span, DiagnosticMessages.MissingArgument(name, "1"));
+            return Value.Unknown;
+        }
+
+        switch (name)
+        {
+            case "sin" or "cos" or "tan":
+            {
+                if (!Scalar(args, 0, ArgSpan(0), out var q, ref problem)) return Value.Unknown;
+                if (!q.Dimension.IsDimensionless)
+                {
+                    problem = Fail(DiagnosticCodes.ArgumentNotDimensionless, ArgSpan(0), DiagnosticMessages.ArgumentNotDimensionless(name, Describe(q)));
+                    return Value.Unknown;
+                }
+                double radians = q.Si * Math.Pow(2 * Math.PI, q.Dimension[Dimension.Rev]);
+                double r = name == "sin" ? Math.Sin(radians) : name == "cos" ? Math.Cos(radians) : Math.Tan(radians);
+                return Value.Of(new Quantity(r, Dimension.None));
+            }
+            case "asin" or "acos" or "atan":
+            {
+                if (!Plain(args, 0, ArgSpan(0), name, out double x, ref problem)) return Value.Unknown;
+                if (name != "atan" && (x < -1 - 1e-12 || x > 1 + 1e-12))
+                {
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the argument must lie between −1 and 1"));
+                    return Value.Unknown;
+                }
+                x = Math.Clamp(x, -1e300, 1e300);
+                double r = name == "asin" ? Math.Asin(Math.Clamp(x, -1, 1)) : name == "acos" ? Math.Acos(Math.Clamp(x, -1, 1)) : Math.Atan(x);
+                return Value.Of(new Quantity(r, Dimension.Of(Dimension.Angle)));
+            }
+            case "atan2":
+            {
+                if (!Scalar(args, 0, ArgSpan(0), out var y, ref problem) || !Scalar(args, 1, ArgSpan(1), out var x, ref problem)) return Value.Unknown;
+                if (!y.Dimension.SiEquals(x.Dimension))
+                {
+                    problem = Fail(DiagnosticCodes.DimensionMismatch, span, DiagnosticMessages.DimensionMismatch("take atan2 of", Describe(y), y.Dimension, Describe(x), x.Dimension));
+                    return Value.Unknown;
+                }
+                return Value.Of(new Quantity(Math.Atan2(y.Si, x.Si), Dimension.Of(Dimension.Angle)));
+            }
+            case "sqrt" or "cbrt":
+            {
+                if (!Scalar(args, 0, ArgSpan(0), out var q, ref problem)) return Value.Unknown;
+                int root = name == "sqrt" ? 2 : 3;
+                if (!q.Dimension.TryPow(1, root, out var dim))
+                {
+                    problem = Fail(DiagnosticCodes.NonIntegerExponent, span, DiagnosticMessages.NonIntegerExponent(Describe(q), root == 2 ? "1/2" : "1/3"));
+                    return Value.Unknown;
+                }
+                if (root == 2 && q.Si < 0)
+                {
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the square root of a negative value has no real value"));
+                    return Value.Unknown;
+                }
+                return Value.Of(new Quantity(root == 2 ? Math.Sqrt(q.Si) : Math.Cbrt(q.Si), dim));
+            }
+            case "abs":
+            {
+                if (args[0].Kind == ValueKind.List) return Value.Of(args[0].List! with { Values = args[0].List!.Values.Select(Math.Abs).ToArray() });
+                if (!Scalar(args, 0, ArgSpan(0), out var q, ref problem)) return Value.Unknown;
+                return Value.Of(q with { Si = Math.Abs(q.Si) });
+            }
+            case "min" or "max":
+                return Extreme(name, args, call, ref problem);
+            case "exp" or "ln" or "log10":
+            {
+                if (!Plain(args, 0, ArgSpan(0), name, out double x, ref problem)) return Value.Unknown;
+                if (name != "exp" && x <= 0)
+                {
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the logarithm needs a positive number"));
+                    return Value.Unknown;
+                }
+                return Value.Of(new Quantity(name == "exp" ? Math.Exp(x) : name == "ln" ? Math.Log(x) : Math.Log10(x), Dimension.None));
+            }
+            case "round":
+            {
+                if (!Scalar(args, 0, ArgSpan(0), out var x, ref problem) || !Scalar(args, 1, ArgSpan(1), out var step, ref problem)) return Value.Unknown;
+                if (!x.Dimension.SiEquals(step.Dimension))
+                {
+                    problem = Fail(DiagnosticCodes.DimensionMismatch, span, DiagnosticMessages.DimensionMismatch("round", Describe(x), x.Dimension, "a step of " + Describe(step), step.Dimension));
+                    return Value.Unknown;
+                }
+                if (step.Si <= 0)
+                {
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(1), DiagnosticMessages.DomainError(name, "the step must be positive"));
+                    return Value.Unknown;
+                }
+                return Value.Of(x with { Si = RoundToStep(x.Si, step.Si) });
+            }
+            case "sum" or "mean" or "rms" or "count":
+            {
+                if (!ListArg(args, 0, ArgSpan(0), name, out var list, ref problem)) return Value.Unknown;
+                var v = list.Values;
+                if (name == "count") return Value.Of(new Quantity(v.Length, Dimension.None));
+                if (v.Length == 0 && name != "sum")
+                {
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the list is empty"));
+                    return Value.Unknown;
+                }
+                double r = name switch
+                {
+                    "sum" => v.Sum(),
+                    "mean" => v.Average(),
+                    _ => Math.Sqrt(v.Sum(x => x * x) / v.Length),
+                };
+                return Value.Of(new Quantity(r, list.Dimension, list.Tag));
+            }
+            case "power_mean":
+            {
+                if (!ListArg(args, 0, ArgSpan(0), name, out var list, ref problem) || !Plain(args, 1, ArgSpan(1), name, out double p, ref problem)) return Value.Unknown;
+                if (list.Values.Length == 0 || p == 0)
+                {
+                    problem = Fail(DiagnosticCodes.DomainError, span, DiagnosticMessages.DomainError(name, "needs a non-empty list and a non-zero power"));
+                    return Value.Unknown;
+                }
+                double r = Math.Pow(list.Values.Sum(x => Math.Pow(x, p)) / list.Values.Length, 1 / p);
+                return Value.Of(new Quantity(r, list.Dimension, list.Tag));
+            }
+        }
+        problem = Fail(DiagnosticCodes.UnknownFunction, span, DiagnosticMessages.UnknownFunction(name, null));
+        return Value.Unknown;
+    }
+
+    /// <summary>Rounds to a multiple of <paramref name="step"/>, half away from zero, on the decimal value.</summary>
+    public static double RoundToStep(double x, double step)
+    {
+        double n = x / step;
+        if (Math.Abs(n) < 1e15)
+        {
+            decimal d = Math.Round((decimal)n, 0, MidpointRounding.AwayFromZero);
+            return (double)d * step;
+        }
+        return x;
+    }
+
+    private static Value Extreme(string name, Value[] args, CallSyntax call, ref (string, TextSpan, string)? problem)
+    {
+        var values = new List<double>();
+        Dimension dim = default;
+        Kind? tag = null;
+        for (int i = 0; i < args.Length; i++)
+        {
+            var a = args[i];
+            Dimension d;
+            IEnumerable<double> xs;
+            if (a.Kind == ValueKind.List) { d = a.List!.Dimension; xs = a.List.Values; tag ??= a.List.Tag; }
+            else if (a.Kind == ValueKind.Quantity) { d = a.Quantity.Dimension; xs = [a.Quantity.Si]; tag ??= a.Quantity.Tag; }
+            else
+            {
+                problem = (DiagnosticCodes.TypeMismatch, call.Arguments[i].Value.Span, DiagnosticMessages.TypeMismatch("a quantity", a.Describe()));
+                return Value.Unknown;
+            }
+            if (i == 0) dim = d;
+            else if (!d.SiEquals(dim))
+            {
+                problem = (DiagnosticCodes.DimensionMismatch, call.Arguments[i].Value.Span,
+                    DiagnosticMessages.DimensionMismatch("compare", Kinds.Describe(dim), dim, Kinds.Describe(d), d));
+                return Value.Unknown;
+            }
+            values.AddRange(xs);
+        }
+        if (values.Count == 0)
+        {
+            problem = (DiagnosticCodes.DomainError, call.Span, DiagnosticMessages.DomainError(name, "the list is empty"));
+            return Value.Unknown;
+        }
+        return Value.Of(new Quantity(name == "min" ? values.Min() : values.Max(), dim, tag));
+    }
+
+    private static bool Scalar(Value[] args, int i, TextSpan span, out Quantity q, ref (string, TextSpan, string)? problem)
+    {
+        q = default;
+        if (args[i].Kind != ValueKind.Quantity)
+        {
+            problem = (DiagnosticCodes.TypeMismatch, span, DiagnosticMessages.TypeMismatch("a quantity", args[i].Describe()));
+            return false;
+        }
+        q = args[i].Quantity;
+        return true;
+    }
+
+    private static bool Plain(Value[] args, int i, TextSpan span, string name, out double x, ref (string, TextSpan, string)? problem)
+    {
+        x = 0;
+        if (!Scalar(args, i, span, out var q, ref problem)) return false;
+        if (!q.Dimension.IsNone && !(q.Dimension.IsDimensionless && q.Dimension[Dimension.Angle] == 0 && q.Dimension[Dimension.Rev] == 0))
+        {
+            problem = (DiagnosticCodes.ArgumentNotDimensionless, span, DiagnosticMessages.ArgumentNotDimensionless(name, Describe(q)));
+            return false;
+        }
+        x = q.Si;
+        return true;
+    }
+
+    private static bool ListArg(Value[] args, int i, TextSpan span, string name, out QuantityList list, ref (string, TextSpan, string)? problem)
+    {
+        list = null!;
+        if (args[i].Kind == ValueKind.Quantity) { list = new QuantityList([args[i].Quantity.Si], args[i].Quantity.Dimension, args[i].Quantity.Tag); return true; }
+        if (args[i].Kind != ValueKind.List)
+        {
+            problem = (DiagnosticCodes.TypeMismatch, span, DiagnosticMessages.TypeMismatch($"a list for {name}", args[i].Describe()));
+            return false;
+        }
+        list = args[i].List!;
+        return true;
+    }
+
+    private static string Describe(Quantity q) =>
+        Display.DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, Display.UnitSystem.Metric)?.Text is { } u ? $"a value in {u} ({Kinds.Describe(q.Dimension, q.Tag)})" : "a plain number";
+}

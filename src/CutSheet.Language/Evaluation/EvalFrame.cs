@@ -1,0 +1,34 @@
+using CutSheet.Language.Semantics;
+using CutSheet.Language.Text;
+
+namespace CutSheet.Language.Evaluation;
+
+/// <summary>
+/// Where an expression is being evaluated: the scope its names resolve in, function locals,
+/// the call depth, and the place in the evaluated sheet where problems inside another sheet's
+/// function surface (<see cref="CallSite"/>).
+/// </summary>
+internal sealed class EvalFrame
+{
+    public required SheetScope Scope { get; init; }
+    public Dictionary<string, Value>? Locals { get; init; }
+    public int Depth { get; init; }
+
+    /// <summary>Only dimensions matter (a function body's check, a branch not taken): no cautions, no value errors.</summary>
+    public bool CheckOnly { get; init; }
+
+    /// <summary>The span in the evaluated sheet that stands for this evaluation (a call, or the statement).</summary>
+    public TextSpan CallSite { get; init; }
+
+    /// <summary>True when spans belong to another sheet than the one being evaluated.</summary>
+    public bool Foreign { get; init; }
+
+    /// <summary>The function being evaluated, for messages and cautions.</summary>
+    public FunctionSymbol? Function { get; init; }
+
+    /// <summary>True when the formula being evaluated mentions π (suppresses forgotten-2π cautions).</summary>
+    public bool MentionsPi { get; init; }
+
+    /// <summary>Definitions of the evaluated sheet that the current statement refers to.</summary>
+    public HashSet<DefinitionSymbol>? Dependencies { get; init; }
+}

@@ -1,0 +1,256 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Results;
+using CutSheet.Language.Semantics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+using CutSheet.Language.Units;
+
+namespace CutSheet.Language.Evaluation;
+
+internal sealed partial class ExpressionEvaluator
+{
+    private Value Call(CallSyntax call, EvalFrame f)
+    {
+        if (call.Callee.Qualifier is null && f.Locals?.ContainsKey(call.Callee.Name) == true)
+            return Error(f, DiagnosticCodes.NotAFunction, call.Callee.Span, DiagnosticMessages.NotAFunction(call.Callee.Name));
+        object? symbol = call.Callee.Qualifier is null ? f.Scope.Find(call.Callee.Name) : ResolveName(call.Callee, f, out _);
+        switch (symbol)
+        {
+            case FunctionSymbol fn:
+                return CallUser(fn, call, f);
+            case null when call.Callee.Qualifier is null && Builtins.IsFunction(call.Callee.Name):
+                return CallBuiltin(call, f);
+            case null:
+                var names = f.Scope.Functions.Keys.Concat(f.Scope.Imported.Where(i => i.Value.Symbol is FunctionSymbol).Select(i => i.Key)).Concat(Builtins.FunctionNames);
+                EvaluateArguments(call, f);
+                return Error(f, DiagnosticCodes.UnknownFunction, call.Callee.Span, DiagnosticMessages.UnknownFunction(call.Callee.FullName, Suggest(call.Callee.Name, names)));
+            default:
+                EvaluateArguments(call, f);
+                return Error(f, DiagnosticCodes.NotAFunction, call.Callee.Span, DiagnosticMessages.NotAFunction(call.Callee.FullName));
+        }
+    }
+
+    private Value[] EvaluateArguments(CallSyntax call, EvalFrame f)
+    {
+        var values = new Value[call.Arguments.Count];
+        for (int i = 0; i < values.Length; i++) values[i] = Evaluate(call.Arguments[i].Value, f);
+        return values;
+    }
+
+    private Value CallBuiltin(CallSyntax call, EvalFrame f)
+    {
+        foreach (var a in call.Arguments)
+        {
+            if (a.Name is not null) return Error(f, DiagnosticCodes.ArgumentList, a.NameSpan, DiagnosticMessages.UnknownArgument(call.Callee.Name, a.Name));
+        }
+        var args = EvaluateArguments(call, f);
+        foreach (var a in args) if (a.IsUnknown) return Value.Unknown;
+        var result = Builtins.Call(call.Callee.Name, args, call, out var problem);
+        if (problem is not null)
+        {
+            var (code, span, message) = problem.Value;
+            if (f.CheckOnly && code is DiagnosticCodes.DomainError or DiagnosticCodes.DivisionByZero or DiagnosticCodes.ListMismatch) return Value.Unknown;
+            return Error(f, code, span, message);
+        }
+        if (result.Kind == ValueKind.Quantity && !Finite(f, call.Span, result.Quantity.Si)) return Value.Unknown;
+        return result;
+    }
+
+    private Value CallUser(FunctionSymbol fn, CallSyntax call, EvalFrame f)
+    {
+        string name = call.Callee.FullName;
+        if (f.Depth >= MaxCallDepth)
+            return Error(f, DiagnosticCodes.LimitExceeded, call.Span, DiagnosticMessages.LimitExceeded($"calls nested more than {MaxCallDepth} deep"));
+
+        // Match arguments to parameters: positional first, then named.
+        var bound = new ArgumentSyntax?[fn.Parameters.Count];
+        bool named = false, ok = true;
+        for (int i = 0; i < call.Arguments.Count; i++)
+        {
+            var a = call.Arguments[i];
+            int index;
+            if (a.Name is null)
+            {
+                if (named) { Error(f, DiagnosticCodes.ArgumentList, a.Span, DiagnosticMessages.PositionalAfterNamed); ok = false; continue; }
+                index = i;
+                if (index >= bound.Length) { Error(f, DiagnosticCodes.ArgumentList, a.Span, DiagnosticMessages.TooManyArguments(name, bound.Length)); ok = false; continue; }
+            }
+            else
+            {
+                named = true;
+                index = fn.Parameters.FindIndex(p => p.Name == a.Name);
+                if (index < 0) { Error(f, DiagnosticCodes.ArgumentList, a.NameSpan, DiagnosticMessages.UnknownArgument(name, a.Name)); ok = false; continue; }
+                if (bound[index] is not null) { Error(f, DiagnosticCodes.ArgumentList, a.NameSpan, DiagnosticMessages.DuplicateArgument(name, a.Name)); ok = false; continue; }
+            }
+            bound[index] = a;
+        }
+
+        var locals = new Dictionary<string, Value>(StringComparer.Ordinal);
+        bool foreign = f.Foreign || !ReferenceEquals(fn.Home, _top);
+        var callSite = f.Foreign ? f.CallSite : call.Span;
+        var bodyFrame = new EvalFrame
+        {
+            Scope = fn.Home, Locals = locals, Depth = f.Depth + 1, CheckOnly = f.CheckOnly, CallSite = callSite,
+            Foreign = foreign, Function = fn, MentionsPi = PiScanner.Mentions(fn),
+        };
+        bool unknown = false;
+        for (int i = 0; i < fn.Parameters.Count; i++)
+        {
+            var p = fn.Parameters[i];
+            Value v;
+            if (bound[i] is { } a)
+            {
+                v = Evaluate(a.Value, f);
+                if (!v.IsUnknown) v = CheckArgument(fn, name, p, a.Value, v, f);
+            }
+            else if (p.Syntax.Default is { } def)
+            {
+                v = Evaluate(def, bodyFrame);
+                if (!v.IsUnknown) v = CheckArgument(fn, name, p, def, v, bodyFrame);
+            }
+            else
+            {
+                Error(f, DiagnosticCodes.ArgumentList, call.Span, DiagnosticMessages.MissingArgument(name, p.Name));
+                ok = false;
+                v = Value.Unknown;
+            }
+            if (v.IsUnknown) unknown = true;
+            locals[p.Name] = v;
+        }
+        if (!ok || unknown || !fn.IsValid) return Value.Unknown;
+        return InvokeBody(fn, name, call, bodyFrame, f);
+    }
+
+    /// <summary>Runs a function's clauses and formula in its own frame; cautions fire at the call site.</summary>
+    internal Value InvokeBody(FunctionSymbol fn, string name, CallSyntax? call, EvalFrame body, EvalFrame caller)
+    {
+        var syntax = fn.Syntax;
+        foreach (var local in syntax.Clauses.Locals)
+        {
+            body.Locals![local.Name] = Evaluate(local.Value, body);
+        }
+        foreach (var req in syntax.Clauses.Require)
+        {
+            var cond = Evaluate(req.Condition, body);
+            if (cond.Kind == ValueKind.Boolean && !cond.Boolean && !body.CheckOnly)
+            {
+                string condition = ConditionText(fn, req.Condition);
+                var span = body.Foreign ? body.CallSite : call?.Span ?? req.Span;
+                _sink.Report(new Diagnostic(DiagnosticCodes.RequirementFailed, Severity.Error, span,
+                    DiagnosticMessages.RequirementFailed(name, condition, req.Message?.Value), RelatedFor(fn, req.Span, body), []));
+                return Value.Unknown;
+            }
+        }
+        var result = Evaluate(syntax.Body, body);
+        if (!body.CheckOnly)
+        {
+            var site = body.Foreign ? body.CallSite : call?.Span ?? syntax.Span;
+            foreach (var valid in syntax.Clauses.Valid)
+            {
+                var cond = Evaluate(valid.Condition, body);
+                if (cond.Kind == ValueKind.Boolean && !cond.Boolean)
+                {
+                    Fire(CautionLevel.Caution, DiagnosticMessages.OutsideValidity(name, ConditionText(fn, valid.Condition), valid.Message?.Value), site, fn.Name, DiagnosticCodes.OutsideValidity);
+                }
+            }
+            foreach (var caution in syntax.Clauses.Cautions)
+            {
+                var cond = Evaluate(caution.Condition, body);
+                if (cond.Kind == ValueKind.Boolean && cond.Boolean) Fire(caution.Level, caution.Message.Value, site, fn.Name, null);
+            }
+        }
+        if (result.IsUnknown) return result;
+        return CheckReturn(fn, name, result, body);
+    }
+
+    private IReadOnlyList<RelatedLocation> RelatedFor(FunctionSymbol fn, TextSpan span, EvalFrame body) =>
+        body.Foreign ? [new RelatedLocation(span, "in " + fn.Name, fn.Home.Path)] : [];
+
+    private static string ConditionText(FunctionSymbol fn, ExpressionSyntax condition)
+    {
+        var source = fn.Home.SourceText;
+        return source is null ? "its stated range" : source.Slice(condition.Span);
+    }
+
+    private void Fire(CautionLevel level, string message, TextSpan site, string? origin, string? code)
+    {
+        foreach (var c in _sink.Cautions) if (c.Message == message && c.Span == site) return;
+        _sink.Cautions.Add(new CautionResult(level, message, site, null, origin) { Code = code });
+    }
+
+    private Value CheckReturn(FunctionSymbol fn, string name, Value result, EvalFrame body)
+    {
+        if (fn.ReturnsBoolean) return result.Kind == ValueKind.Boolean ? result : TypeError(body, fn.Syntax.Body.Span, "true or false", result);
+        if (fn.ReturnChoice is not null)
+            return result.Kind == ValueKind.Choice && result.Choice!.Type == fn.ReturnChoice ? result : TypeError(body, fn.Syntax.Body.Span, "an option of " + fn.ReturnChoice.Name, result);
+        if (fn.ReturnsList) return result.Kind == ValueKind.List ? result : TypeError(body, fn.Syntax.Body.Span, "a list", result);
+        var kind = fn.ReturnKind;
+        if (kind is null) return result;
+        if (result.Kind != ValueKind.Quantity) return TypeError(body, fn.Syntax.Body.Span, kind.Description, result);
+        var q = result.Quantity;
+        if (!q.Dimension.SiEquals(kind.Dimension))
+        {
+            var saved = new EvalFrame { Scope = body.Scope, Foreign = body.Foreign, CallSite = body.CallSite, Function = fn };
+            return Error(saved, DiagnosticCodes.ReturnKind, fn.Syntax.ReturnKindSpan,
+                DiagnosticMessages.ReturnKind(name, kind, Label(fn.Syntax.Body, q, body), q.Dimension));
+        }
+        // The declared return kind settles the kind (torque, not energy; a lead per revolution).
+        double factor = 1;
+        if (q.Dimension[Dimension.Angle] != kind.Dimension[Dimension.Angle] && q.Dimension.RotationOrder == kind.Dimension.RotationOrder)
+        {
+            factor = Math.Pow(2 * Math.PI, q.Dimension[Dimension.Rev] - kind.Dimension[Dimension.Rev]);
+        }
+        return Value.Of(new Quantity(q.Si * factor, kind.Dimension, kind.IsTagged ? kind : q.Tag is not null && q.Tag.Dimension == kind.Dimension ? q.Tag : null));
+    }
+
+    /// <summary>
+    /// Checks an argument against its parameter's declared kind and gives the function the value
+    /// in that kind. Dimensions must agree; revolutions against radians is an error; a plain
+    /// value where a per-revolution (or per-tooth…) quantity is expected is a warning (the
+    /// lead-for-pitch trap); a count a plain value lacks is supplied silently (n = v/(π·D) is a
+    /// rotational frequency).
+    /// </summary>
+    private Value CheckArgument(FunctionSymbol fn, string name, ParameterSymbol p, ExpressionSyntax syntax, Value v, EvalFrame f)
+    {
+        if (p.Choice is not null)
+            return v.Kind == ValueKind.Choice && v.Choice!.Type == p.Choice ? v : TypeError(f, syntax.Span, $"an option of {p.Choice.Name} for '{p.Name}'", v);
+        if (p.IsBoolean)
+            return v.Kind == ValueKind.Boolean ? v : TypeError(f, syntax.Span, $"true or false for '{p.Name}'", v);
+        if (p.IsList)
+        {
+            if (v.Kind == ValueKind.Quantity) return Value.Of(new QuantityList([v.Quantity.Si], v.Quantity.Dimension, v.Quantity.Tag));
+            return v.Kind == ValueKind.List ? v : TypeError(f, syntax.Span, $"a list for '{p.Name}'", v);
+        }
+        var kind = p.Kind!;
+        if (v.Kind != ValueKind.Quantity) return TypeError(f, syntax.Span, $"{kind.Description} for '{p.Name}'", v);
+        var q = v.Quantity;
+        var d = q.Dimension;
+        var k = kind.Dimension;
+        if (!d.SiEquals(k))
+        {
+            var message = DiagnosticMessages.ArgumentDimension(name, p.Name, kind, Label(syntax, q, f), d);
+            return DimensionError(f, syntax.Span, message, syntax, d, new ListSyntax(syntax.Span, []), k, DiagnosticCodes.ArgumentDimension);
+        }
+        const double factor = 1;
+        if (d.RotationOrder == k.RotationOrder && d.RotationOrder != 0 && d[Dimension.Angle] != k[Dimension.Angle])
+        {
+            return Error(f, DiagnosticCodes.ArgumentRotation, syntax.Span, DiagnosticMessages.ArgumentRotation(name, p.Name, kind, Label(syntax, q, f)));
+        }
+        for (int i = Dimension.SiCount; i < Dimension.Count; i++)
+        {
+            int have = d[i], want = k[i];
+            if (have == want) continue;
+            bool silentInsert = have == 0 && want > 0 && i != Dimension.Angle;
+            if (!silentInsert)
+            {
+                Warn(f, DiagnosticCodes.ArgumentCount, syntax.Span, DiagnosticMessages.ArgumentCount(name, p.Name, kind, Label(syntax, q, f), d));
+                break;
+            }
+        }
+        if (kind.IsTagged && q.Tag is not null && q.Tag != kind)
+        {
+            return Error(f, DiagnosticCodes.ArgumentKind, syntax.Span, DiagnosticMessages.ArgumentKind(name, p.Name, kind, q.Tag));
+        }
+        return Value.Of(new Quantity(q.Si * factor, k, kind.IsTagged ? kind : null));
+    }
+}

@@ -1,0 +1,139 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+using CutSheet.Language.Units;
+
+namespace CutSheet.Language.Evaluation;
+
+internal sealed partial class ExpressionEvaluator
+{
+    /// <summary>
+    /// A chain of <c>*</c> and <c>/</c>, evaluated flat (a long product does not recurse) and then
+    /// examined as a whole for the rotation traps of ISO 80000-3: torque × rotational frequency
+    /// without 2π, rotational frequency × length without π, a per-revolution quantity × an angle.
+    /// </summary>
+    private Value Product(BinarySyntax root, EvalFrame f)
+    {
+        var operands = new List<(bool Divide, ExpressionSyntax Syntax)>();
+        ExpressionSyntax node = root;
+        while (node is BinarySyntax { Operator: BinaryOperator.Multiply or BinaryOperator.Divide } bin)
+        {
+            operands.Add((bin.Operator == BinaryOperator.Divide, bin.Right));
+            node = bin.Left;
+        }
+        operands.Add((false, node));
+        operands.Reverse();
+
+        var values = new Value[operands.Count];
+        bool unknown = false;
+        for (int i = 0; i < operands.Count; i++)
+        {
+            values[i] = Evaluate(operands[i].Syntax, f);
+            if (values[i].IsUnknown) unknown = true;
+        }
+        if (unknown) return Value.Unknown;
+
+        var acc = values[0];
+        if (acc.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, operands[0].Syntax.Span, "a quantity", acc);
+        for (int i = 1; i < values.Length; i++)
+        {
+            var v = values[i];
+            if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, operands[i].Syntax.Span, "a quantity", v);
+            var (ad, at) = DimensionOf(acc);
+            var (vd, vt) = DimensionOf(v);
+            bool divide = operands[i].Divide;
+            var dim = divide ? ad / vd : ad * vd;
+            // A plain number keeps the other side's kind (T / eta is still a torque).
+            Kind? tag = vd.IsNone ? at : ad.IsNone && !divide ? vt : null;
+            if (divide && !f.CheckOnly)
+            {
+                bool zero = v.Kind == ValueKind.Quantity ? v.Quantity.Si == 0 : v.List!.Values.Contains(0);
+                if (zero) return Error(f, DiagnosticCodes.DivisionByZero, operands[i].Syntax.Span, DiagnosticMessages.DivisionByZero);
+            }
+            acc = Elementwise(f, root.Span, acc, v, divide ? (x, y) => x / y : (x, y) => x * y, dim, tag);
+            if (acc.IsUnknown) return acc;
+        }
+        if (!f.CheckOnly) RotationTraps(root, operands, values, acc, f);
+        return acc;
+    }
+
+    private void RotationTraps(BinarySyntax root, List<(bool Divide, ExpressionSyntax Syntax)> operands, Value[] values, Value result, EvalFrame f)
+    {
+        var (rd, _) = DimensionOf(result);
+        bool torque = false, rotational = false, length = false, namedNumber = false;
+        int perRev = -1, angle = -1;
+        var torqueDim = Dimension.FromSi(2, 1, -2);
+        for (int i = 0; i < operands.Count; i++)
+        {
+            var (d, tag) = DimensionOf(values[i]);
+            if (operands[i].Divide) continue;
+            if (d.SiEquals(torqueDim) && tag != Kinds.Energy) torque = true;
+            if (d[Dimension.Rev] > 0 && d[Dimension.Time] < 0) rotational = true;
+            if (d.SiEquals(Dimension.FromSi(1, 0, 0)) && d[Dimension.Rev] == 0) length = true;
+            if (d.IsNone && operands[i].Syntax is NameSyntax) namedNumber = true;
+            if (d[Dimension.Rev] < 0) perRev = i;
+            if (d[Dimension.Angle] > 0) angle = i;
+        }
+        if (f.MentionsPi) { torque = false; length = false; }
+        var insert2Pi = new Fix("multiply by 2 * pi", [new TextEdit(new TextSpan(root.Span.Start, 0), "2 * pi * ")]);
+        if (torque && rotational && rd[Dimension.Rev] > 0)
+        {
+            Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, insert2Pi);
+        }
+        else if (length && rotational && rd[Dimension.Rev] > 0 && rd.SiEquals(Dimension.FromSi(1, 0, -1)) && !namedNumber)
+        {
+            Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, insert2Pi);
+        }
+        if (perRev >= 0 && angle >= 0)
+        {
+            var s = operands[angle].Syntax;
+            string text = f.Foreign ? "" : _source.Slice(s.Span);
+            var fix = new Fix("convert the angle to revolutions", [new TextEdit(s.Span, $"({text} as rev)")]);
+            Warn(f, DiagnosticCodes.PerRevTimesAngle, root.Span, DiagnosticMessages.PerRevTimesAngle, fix);
+        }
+    }
+
+    /// <summary>
+    /// <c>as UNIT</c>: the SI dimensions must agree. Between revolutions and radians (rpm ↔ rad/s,
+    /// rev ↔ deg) the 2π of ISO 80000-3 is applied here and only here.
+    /// </summary>
+    private Value Convert(ConvertSyntax c, EvalFrame f)
+    {
+        var v = Evaluate(c.Operand, f);
+        var resolution = UnitCatalog.Default.Resolve(c.Unit.Text);
+        if (resolution.Unit is null) return UnitError(c.Unit, resolution.Error!, f);
+        if (v.IsUnknown) return v;
+        if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, c.Operand.Span, "a quantity", v);
+        var unit = resolution.Unit;
+        var (d, tag) = DimensionOf(v);
+        if (!d.SiEquals(unit.Dimension))
+        {
+            string message = DiagnosticMessages.ConversionMismatch(Label(c.Operand, Sample(v), f), d, unit.Text, unit.Dimension);
+            return DimensionError(f, c.Unit.Span, message, c.Operand, d, c, unit.Dimension, DiagnosticCodes.ConversionMismatch);
+        }
+        double factor = RotationBridge(d, unit.Dimension, c, f);
+        var newTag = unit.Tag ?? (d.SiEquals(Dimension.FromSi(2, 1, -2)) ? tag : null);
+        if (tag == Kinds.Torque && unit.Tag == Kinds.Energy)
+        {
+            Warn(f, DiagnosticCodes.TorqueAsEnergy, c.Unit.Span, DiagnosticMessages.TorqueAsEnergy, severity: Severity.Information);
+        }
+        if (tag is not null && unit.Tag is not null && tag != unit.Tag && !(tag == Kinds.Torque && unit.Tag == Kinds.Energy))
+        {
+            return Error(f, DiagnosticCodes.KindMismatch, c.Unit.Span, DiagnosticMessages.KindMismatch("convert between", tag.Name, unit.Tag.Name));
+        }
+        if (v.Kind == ValueKind.List)
+            return Value.Of(new QuantityList(v.List!.Values.Select(x => x * factor).ToArray(), unit.Dimension, newTag));
+        return Value.Of(new Quantity(v.Quantity.Si * factor, unit.Dimension, newTag));
+    }
+
+    /// <summary>The factor (2π)^k that carries k revolutions over into radians; warns when an angle appears or vanishes without it.</summary>
+    private double RotationBridge(Dimension from, Dimension to, ConvertSyntax c, EvalFrame f)
+    {
+        int a = from[Dimension.Angle], b = from[Dimension.Rev], cc = to[Dimension.Angle], dd = to[Dimension.Rev];
+        if (a == cc && b == dd) return 1;
+        if (a + b == cc + dd) return Math.Pow(2 * Math.PI, b - dd);
+        if (a > cc) Warn(f, DiagnosticCodes.AngleWithout2Pi, c.Unit.Span, DiagnosticMessages.AngleDropped);
+        else if (a < cc) Warn(f, DiagnosticCodes.AngleWithout2Pi, c.Unit.Span, DiagnosticMessages.AngleInserted);
+        return 1;
+    }
+}

@@ -1,0 +1,220 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Display;
+using CutSheet.Language.Semantics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+using CutSheet.Language.Units;
+
+namespace CutSheet.Language.Evaluation;
+
+/// <summary>
+/// Evaluates expressions to values, checking dimensions and kinds as it goes: every value of a
+/// sheet is known, so one walk both computes and checks. Errors make the value unknown and
+/// are reported once; unknown operands propagate quietly. Split over several files by concern.
+/// </summary>
+internal sealed partial class ExpressionEvaluator
+{
+    private const int MaxCallDepth = 32;
+    private readonly DiagnosticSink _sink;
+    private readonly SheetScope _top;
+    private readonly Func<int> _currentLine;
+    private readonly UnitSystem _system;
+    private readonly SourceText _source;
+    private readonly Func<DefinitionSymbol, int> _lastDependencyLine;
+
+    public ExpressionEvaluator(DiagnosticSink sink, SheetScope top, SourceText source, Func<int> currentLine, Func<DefinitionSymbol, int> lastDependencyLine, UnitSystem system)
+    {
+        _source = source;
+        _lastDependencyLine = lastDependencyLine;
+        _sink = sink;
+        _top = top;
+        _currentLine = currentLine;
+        _system = system;
+    }
+
+    public Value Evaluate(ExpressionSyntax e, EvalFrame f) => e switch
+    {
+        QuantityLiteralSyntax q => Literal(q, f),
+        NameSyntax n => Name(n, f),
+        BinarySyntax b => Binary(b, f),
+        UnarySyntax u => Unary(u, f),
+        ConvertSyntax c => Convert(c, f),
+        CallSyntax c => Call(c, f),
+        ConditionalSyntax c => Conditional(c, f),
+        ListSyntax l => List(l, f),
+        LookupSyntax l => Lookup(l, f),
+        BooleanLiteralSyntax b => Value.Of(b.Value),
+        _ => Value.Unknown,
+    };
+
+    // ----- reporting -----
+
+    private Value Error(EvalFrame f, string code, TextSpan span, string message, Fix? fix = null, IReadOnlyList<RelatedLocation>? related = null)
+    {
+        if (f.CheckOnly && !code.StartsWith("CUT2", StringComparison.Ordinal) && !code.StartsWith("CUT3", StringComparison.Ordinal)) return Value.Unknown;
+        Report(f, code, Severity.Error, span, message, fix, related);
+        return Value.Unknown;
+    }
+
+    private void Warn(EvalFrame f, string code, TextSpan span, string message, Fix? fix = null, Severity severity = Severity.Warning)
+    {
+        if (f.CheckOnly && !code.StartsWith("CUT2", StringComparison.Ordinal)) return;
+        Report(f, code, severity, span, message, fix, null);
+    }
+
+    private void Report(EvalFrame f, string code, Severity severity, TextSpan span, string message, Fix? fix, IReadOnlyList<RelatedLocation>? related)
+    {
+        if (f.Foreign)
+        {
+            // A problem inside another sheet's function surfaces at the call in this sheet, pointing back.
+            var where = new RelatedLocation(span, "in " + (f.Function?.Name ?? "the imported sheet"), f.Scope.Path);
+            string prefix = f.Function is null ? "" : f.Function.Name + ": ";
+            _sink.Report(new Diagnostic(code, severity, f.CallSite, message.StartsWith(prefix, StringComparison.Ordinal) ? message : prefix + message,
+                [where, .. related ?? []], []));
+            return;
+        }
+        _sink.Report(new Diagnostic(code, severity, span, message, related ?? [], fix is null ? [] : [fix]));
+    }
+
+    // ----- literals and names -----
+
+    private Value Literal(QuantityLiteralSyntax q, EvalFrame f)
+    {
+        if (q.Unit is null) return Value.Of(new Quantity(q.Number, Dimension.None));
+        var resolution = UnitCatalog.Default.Resolve(q.Unit.Text);
+        if (resolution.Unit is null) return UnitError(q.Unit, resolution.Error!, f);
+        var unit = resolution.Unit;
+        if (unit.Notes.Count > 0 && !f.CheckOnly && !f.Foreign)
+        {
+            foreach (var note in unit.Notes) Warn(f, DiagnosticCodes.ShopSpelling, q.Unit.Span, note, severity: Severity.Information);
+        }
+        if (!f.Foreign && _top.Find(q.Unit.Text) is DefinitionSymbol && IsPlainSymbol(q.Unit.Text))
+        {
+            var fix = new Fix($"multiply: {q.NumberText} * {q.Unit.Text}", [new TextEdit(q.Span, $"{q.NumberText} * {q.Unit.Text}")]);
+            Warn(f, DiagnosticCodes.UnitAlsoName, q.Unit.Span, DiagnosticMessages.UnitAlsoName(q.Unit.Text), fix);
+        }
+        return Value.Of(new Quantity(unit.ToSi(q.Number), unit.Dimension, unit.Tag));
+    }
+
+    private static bool IsPlainSymbol(string text)
+    {
+        foreach (char c in text) if (!(char.IsLetterOrDigit(c) || c == '_')) return false;
+        return true;
+    }
+
+    private Value UnitError(UnitSyntax unit, UnitError error, EvalFrame f)
+    {
+        var span = new TextSpan(unit.Span.Start + error.Offset, Math.Max(error.Length, 1));
+        if (error.Code == DiagnosticCodes.UnknownUnit)
+        {
+            string symbol = unit.Text.Substring(Math.Min(error.Offset, unit.Text.Length), Math.Min(error.Length, unit.Text.Length - Math.Min(error.Offset, unit.Text.Length)));
+            if (unit.Text == symbol && f.Scope.Find(symbol) is not null)
+            {
+                return Error(f, DiagnosticCodes.NameAfterNumber, unit.Span, DiagnosticMessages.NameAfterNumber(symbol),
+                    new Fix($"write * {symbol}", [new TextEdit(new TextSpan(unit.Span.Start, 0), "* ")]));
+            }
+            if (error.Suggestion is not null)
+            {
+                return Error(f, DiagnosticCodes.UnknownUnit, span, DiagnosticMessages.UnknownUnitWithSuggestion(symbol, error.Suggestion),
+                    new Fix($"write {error.Suggestion}", [new TextEdit(span, error.Suggestion)]));
+            }
+        }
+        return Error(f, error.Code, span, error.Message);
+    }
+
+    private Value Name(NameSyntax n, EvalFrame f)
+    {
+        if (n.Qualifier is null && f.Locals is not null && f.Locals.TryGetValue(n.Name, out var local)) return local;
+        var symbol = ResolveName(n, f, out var error);
+        if (symbol is null)
+        {
+            if (error is not null) Error(f, error.Value.Code, n.Span, error.Value.Message);
+            return Value.Unknown;
+        }
+        switch (symbol)
+        {
+            case DefinitionSymbol d:
+                if (!d.Evaluated)
+                {
+                    if (f.CheckOnly) return Value.Unknown;
+                    if (ReferenceEquals(f.Scope, _top) || d.Path == _top.Path) return UsedBeforeDefinition(n, d, f);
+                    return Value.Unknown;
+                }
+                if (ReferenceEquals(f.Scope, _top)) f.Dependencies?.Add(d);
+                return d.Value;
+            case ChoiceOption o:
+                return Value.Of(o);
+            case FunctionSymbol fn:
+                return Error(f, DiagnosticCodes.TypeMismatch, n.Span, DiagnosticMessages.TypeMismatch("a value", $"the function {fn.Name} (call it with arguments)"));
+            case TableSymbol t:
+                return Error(f, DiagnosticCodes.TypeMismatch, n.Span, DiagnosticMessages.TypeMismatch("a value", $"the table {t.Name} (look up a cell: {t.Name}[key].column)"));
+            case ChoiceType c:
+                return Error(f, DiagnosticCodes.TypeMismatch, n.Span, DiagnosticMessages.TypeMismatch("a value", $"the choice {c.Name} (name one of its options)"));
+            case Quantity q:
+                return Value.Of(q);
+        }
+        return Value.Unknown;
+    }
+
+    /// <summary>Finds what a name means: locals are handled by the caller; then the scope, its imports, and the built-in constants.</summary>
+    private object? ResolveName(NameSyntax n, EvalFrame f, out (string Code, string Message)? error)
+    {
+        error = null;
+        var scope = f.Scope;
+        if (n.Qualifier is not null)
+        {
+            if (!scope.Namespaces.TryGetValue(n.Qualifier, out var ns))
+            {
+                error = (DiagnosticCodes.UnknownName, DiagnosticMessages.UnknownName(n.Qualifier, Suggest(n.Qualifier, scope.Namespaces.Keys)));
+                return null;
+            }
+            var member = ns.FindOwn(n.Name);
+            if (member is null) error = (DiagnosticCodes.UnknownName, DiagnosticMessages.UnknownName(n.FullName, Suggest(n.Name, ns.OwnSymbols().Select(s => s.Name))));
+            return member;
+        }
+        var found = scope.Find(n.Name);
+        if (found is not null) return found;
+        if (Builtins.Constants.TryGetValue(n.Name, out var constant)) return constant;
+        var candidates = scope.OwnSymbols().Select(s => s.Name).Concat(scope.Imported.Keys).Concat(Builtins.Constants.Keys)
+            .Concat(f.Locals?.Keys ?? Enumerable.Empty<string>());
+        error = (DiagnosticCodes.UnknownName, DiagnosticMessages.UnknownName(n.Name, Suggest(n.Name, candidates)));
+        return null;
+    }
+
+    private Value UsedBeforeDefinition(NameSyntax n, DefinitionSymbol d, EvalFrame f)
+    {
+        int useLine = _currentLine();
+        Fix? fix = MoveLineFix.Create(_source, d, useLine, _lastDependencyLine(d));
+        return Error(f, DiagnosticCodes.UsedBeforeDefinition, n.Span, DiagnosticMessages.UsedBeforeDefinition(n.Name, useLine + 1, d.Line + 1), fix);
+    }
+
+    internal static string? Suggest(string name, IEnumerable<string> candidates)
+    {
+        string? best = null;
+        int bestDistance = int.MaxValue;
+        foreach (var c in candidates)
+        {
+            if (c.Length > 64 || Math.Abs(c.Length - name.Length) > 3) continue;
+            int d = EditDistance.Compute(name.Length > 64 ? name[..64] : name, c);
+            if (d < bestDistance) { bestDistance = d; best = c; }
+        }
+        return bestDistance <= Math.Max(1, name.Length / 3) ? best : null;
+    }
+
+    /// <summary>Words for an operand in messages: the literal as written, a name with its unit, or the SI unit.</summary>
+    private string Label(ExpressionSyntax e, Quantity q, EvalFrame f)
+    {
+        switch (e)
+        {
+            case QuantityLiteralSyntax lit:
+                return lit.Unit is null ? lit.NumberText : lit.NumberText + " " + lit.Unit.Text;
+            case NameSyntax n when f.Scope.Find(n.Name) is DefinitionSymbol d && d.DisplayUnit is { } u:
+                return $"{n.FullName} in {u.Text}";
+            case ConvertSyntax c:
+                return c.Unit.Text;
+            default:
+                var unit = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, UnitSystem.Metric);
+                return unit?.Text ?? "a plain number";
+        }
+    }
+}

@@ -1,0 +1,197 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Semantics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+using CutSheet.Language.Units;
+
+namespace CutSheet.Language.Evaluation;
+
+internal sealed partial class SheetEvaluator
+{
+    /// <summary>Declares the sheet's own names; a name is declared once, and never over an import or a constant.</summary>
+    private void Declare()
+    {
+        for (int i = 0; i < _syntax.Statements.Count; i++)
+        {
+            var statement = _syntax.Statements[i];
+            int line = LineOf(statement.Span);
+            switch (statement)
+            {
+                case DefinitionSyntax d:
+                    if (CanDeclare(d.Name, d.NameSpan))
+                        _scope.Definitions[d.Name] = new DefinitionSymbol(d, i, line, _source.Path);
+                    break;
+                case FunctionSyntax fn:
+                    if (CanDeclare(fn.Name, fn.NameSpan))
+                        _scope.Functions[fn.Name] = new FunctionSymbol(fn, _scope, line);
+                    break;
+                case ChoiceSyntax c:
+                    if (!CanDeclare(c.Name, c.NameSpan)) break;
+                    var type = new ChoiceType(c.Name, _source.Path);
+                    _scope.Choices[c.Name] = type;
+                    foreach (var (option, span) in c.Options)
+                    {
+                        if (!CanDeclare(option, span)) continue;
+                        var o = new ChoiceOption(type, option, type.Options.Count);
+                        type.Options.Add(o);
+                        _scope.Options[option] = o;
+                    }
+                    break;
+                case TableSyntax t:
+                    if (CanDeclare(t.Name, t.NameSpan))
+                        _scope.Tables[t.Name] = new TableSymbol(t, null, _source.Path);
+                    break;
+            }
+        }
+    }
+
+    private bool CanDeclare(string name, TextSpan span)
+    {
+        if (_scope.FindOwn(name) is { } existing)
+        {
+            int firstLine = existing switch
+            {
+                DefinitionSymbol d => d.Line,
+                FunctionSymbol f => f.Line,
+                TableSymbol t => LineOf(t.Syntax.Span),
+                _ => LineOf(span),
+            };
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.Redefinition(name, firstLine + 1)));
+            return false;
+        }
+        if (_scope.Imported.TryGetValue(name, out var imported))
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportedRedefinition, span, DiagnosticMessages.ImportedRedefinition(name, imported.From.DisplayName)));
+            return false;
+        }
+        if (Builtins.Constants.ContainsKey(name) || Builtins.IsFunction(name))
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.Redefinition(name, 0).Replace("on line 0", "as a built-in")));
+            return false;
+        }
+        return true;
+    }
+
+    /// <summary>Resolves parameter and return kinds: a kind of quantity, a choice, <c>list</c> or <c>boolean</c>.</summary>
+    private void ResolveSignatures()
+    {
+        foreach (var fn in _scope.Functions.Values)
+        {
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var p in fn.Syntax.Parameters)
+            {
+                if (!seen.Add(p.Name))
+                {
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, p.NameSpan, DiagnosticMessages.Redefinition(p.Name, LineOf(p.Span) + 1)));
+                    fn.IsValid = false;
+                }
+                var (kind, choice, isList, isBoolean) = ResolveKind(p.KindName, p.KindSpan);
+                if (kind is null && choice is null && !isList && !isBoolean) fn.IsValid = false;
+                fn.Parameters.Add(new ParameterSymbol(p, kind, choice, isList, isBoolean));
+            }
+            var (rk, rc, rl, rb) = ResolveKind(fn.Syntax.ReturnKind, fn.Syntax.ReturnKindSpan);
+            fn.ReturnKind = rk;
+            fn.ReturnChoice = rc;
+            fn.ReturnsList = rl;
+            fn.ReturnsBoolean = rb;
+            if (rk is null && rc is null && !rl && !rb) fn.IsValid = false;
+        }
+        foreach (var table in _scope.Tables.Values)
+        {
+            var t = table.Syntax;
+            var key = _scope.Choices.GetValueOrDefault(t.KeyChoice)
+                ?? (_scope.Imported.TryGetValue(t.KeyChoice, out var imp) ? imp.Symbol as ChoiceType : null);
+            if (key is null)
+            {
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, t.KeyChoiceSpan, DiagnosticMessages.UnknownKind(t.KeyChoice,
+                    ExpressionEvaluator.Suggest(t.KeyChoice, _scope.Choices.Keys))));
+            }
+            _scope.Tables[t.Name] = new TableSymbol(t, key, _source.Path);
+        }
+    }
+
+    private (Kind? Kind, ChoiceType? Choice, bool IsList, bool IsBoolean) ResolveKind(string name, TextSpan span)
+    {
+        if (name == "list") return (null, null, true, false);
+        if (name == "boolean") return (null, null, false, true);
+        var kind = Kinds.Find(name);
+        if (kind is not null) return (kind, null, false, false);
+        if (_scope.Choices.TryGetValue(name, out var choice)) return (null, choice, false, false);
+        if (_scope.Imported.TryGetValue(name, out var imported) && imported.Symbol is ChoiceType ic) return (null, ic, false, false);
+        var candidates = Kinds.Builtin.Select(k => k.Name).Concat(Kinds.Aliases.Keys).Concat(_scope.Choices.Keys).Append("list").Append("boolean");
+        _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, span, DiagnosticMessages.UnknownKind(name, ExpressionEvaluator.Suggest(name, candidates))));
+        return (null, null, false, false);
+    }
+
+    /// <summary>A function may not call itself, directly or through others: evaluation must always end.</summary>
+    private void RejectRecursion()
+    {
+        var calls = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
+        foreach (var fn in _scope.Functions.Values)
+        {
+            var names = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var e in BodyExpressions(fn.Syntax))
+            {
+                foreach (var n in NameCollector.Names(e)) if (_scope.Functions.ContainsKey(n)) names.Add(n);
+            }
+            calls[fn.Name] = names;
+        }
+        foreach (var fn in _scope.Functions.Values)
+        {
+            var stack = new Stack<string>(calls[fn.Name]);
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            while (stack.Count > 0)
+            {
+                var next = stack.Pop();
+                if (next == fn.Name)
+                {
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.Recursion, fn.Syntax.NameSpan, DiagnosticMessages.Recursion(fn.Name)));
+                    fn.IsValid = false;
+                    break;
+                }
+                if (seen.Add(next)) foreach (var c in calls[next]) stack.Push(c);
+            }
+        }
+    }
+
+    private static IEnumerable<ExpressionSyntax> BodyExpressions(FunctionSyntax fn)
+    {
+        yield return fn.Body;
+        foreach (var p in fn.Parameters) if (p.Default is not null) yield return p.Default;
+        foreach (var l in fn.Clauses.Locals) yield return l.Value;
+        foreach (var v in fn.Clauses.Valid) yield return v.Condition;
+        foreach (var r in fn.Clauses.Require) yield return r.Condition;
+        foreach (var c in fn.Clauses.Cautions) yield return c.Condition;
+    }
+
+    /// <summary>Checks each function body's dimensions once, with each parameter standing in as 1 of its kind.</summary>
+    private void CheckFunctionBodies()
+    {
+        foreach (var fn in _scope.Functions.Values)
+        {
+            if (!fn.IsValid) continue;
+            var locals = new Dictionary<string, Value>(StringComparer.Ordinal);
+            foreach (var p in fn.Parameters)
+            {
+                locals[p.Name] = p switch
+                {
+                    { Choice: { } c } => c.Options.Count > 0 ? Value.Of(c.Options[0]) : Value.Unknown,
+                    { IsBoolean: true } => Value.Of(true),
+                    { IsList: true } => Value.Unknown,
+                    { Kind: { } k } => Value.Of(new Quantity(1, k.Dimension, k.IsTagged ? k : null)),
+                    _ => Value.Unknown,
+                };
+            }
+            var frame = new EvalFrame { Scope = _scope, Locals = locals, CheckOnly = true, Function = fn, CallSite = fn.Syntax.Span, MentionsPi = PiScanner.Mentions(fn) };
+            int before = _sink.Diagnostics.Count(d => d.Severity == Severity.Error);
+            _currentLine = fn.Line;
+            _eval.InvokeBody(fn, fn.Name, null, frame, frame);
+            foreach (var caution in fn.Syntax.Clauses.Cautions)
+            {
+                var m = caution.Message.Value;
+                if (m.Length == 0) _sink.Report(Diagnostic.Warning(DiagnosticCodes.IncompleteStatement, caution.Message.Span, DiagnosticMessages.Incomplete("a caution needs a message")));
+            }
+            if (_sink.Diagnostics.Count(d => d.Severity == Severity.Error) > before) fn.IsValid = false;
+        }
+    }
+}

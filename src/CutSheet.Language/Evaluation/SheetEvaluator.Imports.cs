@@ -1,0 +1,147 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Library;
+using CutSheet.Language.Semantics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+
+namespace CutSheet.Language.Evaluation;
+
+internal sealed partial class SheetEvaluator
+{
+    /// <summary>Loads every <c>use</c>: library sheets by name, workspace sheets by path (confined, no cycles).</summary>
+    private void DeclareImports()
+    {
+        foreach (var use in _syntax.Statements.OfType<UseSyntax>())
+        {
+            var overrides = new Dictionary<string, Value>(StringComparer.Ordinal);
+            var frame = new EvalFrame { Scope = _scope, CallSite = use.Span };
+            foreach (var o in use.Overrides) overrides[o.Name] = _eval.Evaluate(o.Value, frame);
+            string key;
+            string? text;
+            string path;
+            string label;
+            if (!use.IsPath)
+            {
+                text = LibrarySheets.Read(use.Target);
+                path = LibrarySheets.PathOf(use.Target);
+                label = use.Target;
+                key = "library:" + use.Target;
+                if (text is null)
+                {
+                    var suggestion = ExpressionEvaluator.Suggest(use.Target, LibrarySheets.Names);
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan,
+                        DiagnosticMessages.ImportNotFound(use.Target) + (suggestion is null ? $"; library sheets: {string.Join(", ", LibrarySheets.Names)}" : $"; did you mean {suggestion}?")));
+                    continue;
+                }
+                _importNames.Add($"{use.Target} (library {LibrarySheets.Version})");
+            }
+            else
+            {
+                if (!ResolveWorkspacePath(use, out path)) continue;
+                text = _options.Sources.Read(path);
+                label = use.Target;
+                key = path;
+                if (text is null)
+                {
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.ImportNotFound(use.Target)));
+                    continue;
+                }
+                _importNames.Add(path);
+            }
+
+            if (_imports.Loading.Contains(key) || key == (_source.Path ?? ""))
+            {
+                var chain = string.Join(" → ", _imports.Loading.Select(Path.GetFileName).Append(Path.GetFileName(_source.Path ?? "this sheet")).Append(label));
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportCycle, use.TargetSpan, DiagnosticMessages.ImportCycle(chain)));
+                continue;
+            }
+            if (_imports.Loading.Count >= ImportContext.MaxDepth)
+            {
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.LimitExceeded, use.TargetSpan, DiagnosticMessages.LimitExceeded($"imports nested more than {ImportContext.MaxDepth} deep")));
+                continue;
+            }
+
+            string cacheKey = key + "|" + string.Join(";", use.Overrides.Select(o => o.Name + "=" + _source.Slice(o.Value.Span)));
+            if (!_imports.Cache.TryGetValue(cacheKey, out var loaded))
+            {
+                _imports.Loading.Add(_source.Path ?? "");
+                try
+                {
+                    var importOptions = _options with { Overrides = new Dictionary<string, string>() };
+                    loaded = EvaluateScope(new SourceText(text, path), importOptions, _imports, overrides, label);
+                }
+                finally
+                {
+                    _imports.Loading.RemoveAt(_imports.Loading.Count - 1);
+                }
+                _imports.Cache[cacheKey] = loaded;
+            }
+            var (scope, result) = loaded;
+            int errors = result.Diagnostics.Count(d => d.Severity == Severity.Error);
+            if (errors > 0)
+            {
+                var first = result.Diagnostics.First(d => d.Severity == Severity.Error);
+                _sink.Report(new Diagnostic(DiagnosticCodes.ImportHasErrors, Severity.Error, use.TargetSpan, DiagnosticMessages.ImportHasErrors(label, errors),
+                    [new RelatedLocation(first.Span, first.Message, first.Path ?? path)], []));
+            }
+            foreach (var o in use.Overrides)
+            {
+                if (!scope.Definitions.TryGetValue(o.Name, out var target))
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideUnknown(o.Name, label)));
+                else if (!target.IsInput)
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideNotInput(o.Name, label)));
+            }
+            Register(use, scope, label);
+        }
+    }
+
+    private void Register(UseSyntax use, SheetScope scope, string label)
+    {
+        if (use.Alias is not null)
+        {
+            if (_scope.Namespaces.ContainsKey(use.Alias))
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportClash, use.AliasSpan, DiagnosticMessages.ImportClash(use.Alias, _scope.Namespaces[use.Alias].DisplayName, label)));
+            else
+                _scope.Namespaces[use.Alias] = scope;
+            return;
+        }
+        foreach (var (name, symbol) in scope.OwnSymbols())
+        {
+            if (_scope.Imported.TryGetValue(name, out var existing) && !ReferenceEquals(existing.Symbol, symbol))
+            {
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportClash, use.TargetSpan, DiagnosticMessages.ImportClash(name, existing.From.DisplayName, label)));
+                continue;
+            }
+            _scope.Imported[name] = (symbol, scope);
+        }
+    }
+
+    private bool ResolveWorkspacePath(UseSyntax use, out string path)
+    {
+        path = "";
+        string? baseDir = _source.Path is { } p && !p.StartsWith("library/", StringComparison.Ordinal) ? Path.GetDirectoryName(p) : _options.WorkspaceRoot;
+        if (baseDir is null)
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.ImportNotFound(use.Target)));
+            return false;
+        }
+        try
+        {
+            path = Path.GetFullPath(Path.Combine(baseDir, use.Target));
+        }
+        catch (Exception e) when (e is ArgumentException or NotSupportedException or PathTooLongException)
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.ImportNotFound(use.Target)));
+            return false;
+        }
+        string root = _options.Sources.ResolveLinks(Path.GetFullPath(_options.WorkspaceRoot ?? baseDir));
+        string resolved = _options.Sources.ResolveLinks(path);
+        string rootWithSep = root.EndsWith(Path.DirectorySeparatorChar) ? root : root + Path.DirectorySeparatorChar;
+        if (!resolved.StartsWith(rootWithSep, StringComparison.Ordinal))
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportOutsideWorkspace, use.TargetSpan, DiagnosticMessages.ImportOutsideWorkspace(use.Target)));
+            return false;
+        }
+        return true;
+    }
+}

@@ -1,0 +1,148 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Results;
+using CutSheet.Language.Semantics;
+using CutSheet.Language.Syntax;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+
+namespace CutSheet.Language.Evaluation;
+
+internal sealed partial class SheetEvaluator
+{
+    private ValuePresenter? _presenter;
+    private ValuePresenter Presenter => _presenter ??= new ValuePresenter(_display, _scope);
+
+    private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
+    {
+        var deps = new HashSet<DefinitionSymbol>();
+        var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, MentionsPi = PiScanner.Mentions(d.Value), Dependencies = deps };
+        var value = _eval.Evaluate(d.Value, frame);
+        var clauses = d.Clauses;
+        if (!_scope.Definitions.TryGetValue(d.Name, out var symbol) || symbol.Syntax != d)
+        {
+            return new DefinitionResult(d, line, d.Name, null, null, false, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value, false);
+        }
+        symbol.IsInput = deps.Count == 0;
+        _dependencies[symbol] = deps;
+        bool overridden = false;
+        if (overrides.TryGetValue(d.Name, out var o))
+        {
+            if (!symbol.IsInput)
+            {
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, d.NameSpan, DiagnosticMessages.OverrideNotInput(d.Name, _scope.DisplayName)));
+            }
+            else
+            {
+                value = EvaluateOverride(o.Syntax, o.Definition, d);
+                overridden = true;
+            }
+        }
+        else if (_importOverrides.TryGetValue(d.Name, out var imported) && symbol.IsInput)
+        {
+            value = imported;
+            overridden = true;
+        }
+        if (_sink.StatementHasError && !overridden) value = Value.Unknown;
+
+        symbol.Value = value;
+        symbol.Evaluated = true;
+        symbol.IsOverridden = overridden;
+        DisplayedValue? shown = null;
+        string? kind = null;
+        switch (value.Kind)
+        {
+            case ValueKind.Quantity:
+                var unit = overridden ? Presenter.UnitFor(o.Definition?.Value ?? d.Value, value.Quantity) : Presenter.UnitFor(d.Value, value.Quantity);
+                if (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension)) symbol.DisplayUnit = unit with { Dimension = value.Quantity.Dimension };
+                shown = Presenter.Present(value.Quantity, symbol.DisplayUnit ?? (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension) ? unit : null));
+                kind = value.Quantity.Kind?.Name ?? value.Quantity.Dimension.ToString();
+                break;
+            case ValueKind.List:
+                var listUnit = Presenter.UnitFor(d.Value, new Quantity(value.List!.Values.FirstOrDefault(), value.List.Dimension, value.List.Tag));
+                shown = Presenter.PresentList(value.List, listUnit);
+                kind = "list of " + (Units.Kinds.Infer(value.List.Dimension)?.Name ?? value.List.Dimension.ToString());
+                break;
+            case ValueKind.Boolean:
+                shown = ValuePresenter.PresentOther(value);
+                kind = "boolean";
+                break;
+            case ValueKind.Choice:
+                shown = ValuePresenter.PresentOther(value);
+                kind = value.Choice!.Type.Name;
+                break;
+        }
+        return new DefinitionResult(d, line, d.Name, shown, kind, symbol.IsInput, clauses.Assumed is not null, clauses.Source?.Value,
+            clauses.Description?.Value, overridden);
+    }
+
+    private Value EvaluateOverride(SheetSyntax syntax, DefinitionSyntax definition, DefinitionSyntax target)
+    {
+        // The override's text is not the sheet's: evaluate it apart and report its problems at the definition it replaces.
+        var sink = new DiagnosticSink();
+        var evaluator = new ExpressionEvaluator(sink, _scope, syntax.Source, () => _currentLine, LastDependencyLine, _display.Units);
+        var value = evaluator.Evaluate(definition.Value, new EvalFrame { Scope = _scope, CallSite = target.Span, MentionsPi = true });
+        foreach (var d in sink.Diagnostics.Where(d => d.Severity == Severity.Error))
+        {
+            _sink.Report(Diagnostic.Error(d.Code, target.NameSpan, $"--set {target.Name}: {d.Message}"));
+        }
+        return sink.Diagnostics.Any(d => d.Severity == Severity.Error) ? Value.Unknown : value;
+    }
+
+    private StatementResult EvaluateCheck(CheckSyntax c, int line)
+    {
+        string? description = c.Clauses.Description?.Value;
+        if (c.Condition is not BinarySyntax { Operator: BinaryOperator.LessEqual or BinaryOperator.Less or BinaryOperator.GreaterEqual or BinaryOperator.Greater or BinaryOperator.Equal or BinaryOperator.NotEqual } cmp)
+        {
+            _eval.Evaluate(c.Condition, new EvalFrame { Scope = _scope, CallSite = c.Span, MentionsPi = true });
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.NotAComparison, c.Condition.Span, DiagnosticMessages.NotAComparison));
+            return new CheckResult(c, line, CheckStatus.NotEvaluated, "?", null, null, null, null, description, "not a comparison");
+        }
+        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span, MentionsPi = PiScanner.Mentions(c.Condition) };
+        var outcome = _eval.Evaluate(c.Condition, frame);
+        var left = _eval.Evaluate(cmp.Left, frame);
+        var right = _eval.Evaluate(cmp.Right, frame);
+        var tolerance = c.Tolerance is null ? (Value?)null : _eval.Evaluate(c.Tolerance, frame);
+        string op = _source.Slice(cmp.OperatorSpan);
+
+        if (c.Tolerance is not null && cmp.Operator != BinaryOperator.Equal)
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.NotAComparison, c.Tolerance.Span, DiagnosticMessages.NotAComparison));
+        }
+        bool known = outcome.Kind == ValueKind.Boolean && left.Kind == ValueKind.Quantity && right.Kind == ValueKind.Quantity
+            && !_sink.StatementHasError && (tolerance is null || tolerance.Value.Kind == ValueKind.Quantity);
+        if (known && tolerance is { } tv && !tv.Quantity.Dimension.SiEquals(right.Quantity.Dimension))
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.ComparisonMismatch, c.Tolerance!.Span,
+                DiagnosticMessages.ComparisonMismatch("the tolerance", tv.Quantity.Dimension, "the target", right.Quantity.Dimension)));
+            known = false;
+        }
+        if (!known)
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.CheckNotEvaluated, c.Span, DiagnosticMessages.CheckNotEvaluated));
+            return new CheckResult(c, line, CheckStatus.NotEvaluated, op, null, null, null, null, description, "not evaluated");
+        }
+        var semantics = CheckSemantics.Compute(cmp.Operator, left.Quantity.Si, right.Quantity.Si, tolerance?.Quantity.Si);
+        var limitUnit = Presenter.UnitFor(cmp.Right, right.Quantity);
+        var valueUnit = Presenter.UnitFor(cmp.Left, left.Quantity);
+        int digits = _display.Digits;
+        var shownValue = Presenter.Present(left.Quantity, valueUnit);
+        var shownLimit = Presenter.Present(right.Quantity, limitUnit);
+        while (!semantics.Passed && shownValue.Text == shownLimit.Text && digits < 15)
+        {
+            // A failing check never shows both sides equal: add figures until they differ.
+            digits++;
+            shownValue = Presenter.Present(left.Quantity, valueUnit, digits);
+            shownLimit = Presenter.Present(right.Quantity, limitUnit, digits);
+        }
+        DisplayedValue? margin = semantics.Margin is double m ? Presenter.Present(right.Quantity with { Si = m }, limitUnit, digits) : null;
+        string text = $"{shownValue.Primary} {op} {shownLimit.Primary}" + (tolerance is { } t ? $" within {Presenter.Present(t.Quantity, Presenter.UnitFor(c.Tolerance!, t.Quantity)).Primary}" : "");
+        var status = semantics.Passed ? CheckStatus.Passed : CheckStatus.Failed;
+        if (!semantics.Passed)
+        {
+            string detail = text + " does not hold" + (semantics.Utilisation is double u ? $" (utilisation {Display.NumberFormatter.Format(u * 100, 3)} %" : " (") +
+                (margin is null ? ")" : $"{(semantics.Utilisation is null ? "" : ", ")}margin {margin.Primary})");
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.CheckFailed, c.Span, DiagnosticMessages.CheckFailed(detail)));
+        }
+        return new CheckResult(c, line, status, op, shownValue, shownLimit, semantics.Utilisation, margin, description, text);
+    }
+}

@@ -1,0 +1,3 @@
+namespace CutSheet.Language.Evaluation;
+
+public enum ValueKind { Unknown, Quantity, Boolean, Choice, List }

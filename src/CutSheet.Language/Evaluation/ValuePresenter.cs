@@ -1,0 +1,76 @@
+using CutSheet.Language.Display;
+using CutSheet.Language.Results;
+using CutSheet.Language.Semantics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Units;
+
+namespace CutSheet.Language.Evaluation;
+
+/// <summary>
+/// Chooses the unit a value is shown in and formats it. The rule, in order: the unit after
+/// <c>as</c>; the unit of a lone literal as written; the unit of a lone name's definition; the
+/// sheet's unit system by kind. Display never changes the stored value.
+/// </summary>
+internal sealed class ValuePresenter(DisplaySettings settings, SheetScope scope)
+{
+    public ResolvedUnit? UnitFor(ExpressionSyntax root, Quantity q)
+    {
+        switch (root)
+        {
+            case ConvertSyntax c:
+                return UnitCatalog.Default.Resolve(c.Unit.Text).Unit;
+            case QuantityLiteralSyntax { Unit: { } u }:
+                return UnitCatalog.Default.Resolve(u.Text).Unit;
+            case UnarySyntax { Operator: UnaryOperator.Negate, Operand: QuantityLiteralSyntax { Unit: { } nu } }:
+                return UnitCatalog.Default.Resolve(nu.Text).Unit;
+            case QuantityLiteralSyntax:
+                return null;
+            case NameSyntax n when scope.Find(n.Name) is DefinitionSymbol { DisplayUnit: { } du } && du.Dimension == q.Dimension:
+                return du;
+        }
+        return DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, settings.Units == UnitSystem.Inch ? UnitSystem.Inch : UnitSystem.Metric);
+    }
+
+    public DisplayedValue Present(Quantity q, ResolvedUnit? unit, int? digits = null)
+    {
+        int d = digits ?? settings.Digits;
+        double number = unit is null ? q.Si : ConvertForDisplay(q, unit);
+        string text = NumberFormatter.Format(number, d);
+        string? alternate = null;
+        if (settings.Units == UnitSystem.Both && unit is not null)
+        {
+            var inch = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, UnitSystem.Inch);
+            if (inch is not null && inch.Text != unit.Text)
+            {
+                string unitText = inch.Text;
+                alternate = NumberFormatter.Format(ConvertForDisplay(q, inch), d) + (unitText is "°" ? "" : " ") + unitText;
+            }
+        }
+        return new DisplayedValue(q, number, unit?.Text ?? "", text, alternate);
+    }
+
+    public static DisplayedValue PresentOther(Value v) => v.Kind switch
+    {
+        ValueKind.Boolean => new DisplayedValue(default, double.NaN, "", v.Boolean ? "true" : "false", null),
+        ValueKind.Choice => new DisplayedValue(default, double.NaN, "", v.Choice!.Name, null),
+        _ => new DisplayedValue(default, double.NaN, "", "unknown", null),
+    };
+
+    public DisplayedValue PresentList(QuantityList list, ResolvedUnit? unit)
+    {
+        var items = list.Values.Take(20).Select(x => NumberFormatter.Format(unit is null ? x : ConvertForDisplay(new Quantity(x, list.Dimension), unit), settings.Digits));
+        string text = "[" + string.Join(", ", items) + (list.Values.Length > 20 ? ", …" : "") + "]";
+        return new DisplayedValue(new Quantity(double.NaN, list.Dimension, list.Tag), double.NaN, unit?.Text ?? "", text, null);
+    }
+
+    /// <summary>The number in a unit; revolutions and radians are bridged by 2π as in <c>as</c>.</summary>
+    public static double ConvertForDisplay(Quantity q, ResolvedUnit unit)
+    {
+        var from = q.Dimension;
+        var to = unit.Dimension;
+        double si = q.Si;
+        int a = from[Dimension.Angle], b = from[Dimension.Rev], c = to[Dimension.Angle], d = to[Dimension.Rev];
+        if ((a != c || b != d) && a + b == c + d) si *= Math.Pow(2 * Math.PI, b - d);
+        return unit.FromSi(si);
+    }
+}

@@ -1,0 +1,3 @@
+namespace CutSheet.Language.Syntax.Nodes;
+
+public enum UnaryOperator { Negate, Plus, Not }

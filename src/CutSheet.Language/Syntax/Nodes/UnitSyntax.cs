@@ -1,0 +1,6 @@
+using CutSheet.Language.Text;
+
+namespace CutSheet.Language.Syntax.Nodes;
+
+/// <summary>Unit text as written after a number or after <c>as</c>.</summary>
+public sealed record UnitSyntax(string Text, TextSpan Span);

@@ -1,0 +1,41 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Syntax.Nodes;
+using CutSheet.Language.Text;
+
+namespace CutSheet.Language.Syntax;
+
+/// <summary>
+/// A parsed sheet: its text, every token (trivia included, so the tokens reproduce the text),
+/// the statements in order and the syntax diagnostics. Parsing never throws.
+/// </summary>
+public sealed class SheetSyntax
+{
+    internal SheetSyntax(SourceText source, SyntaxToken[] tokens, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
+    {
+        Source = source;
+        Tokens = tokens;
+        Statements = statements;
+        Diagnostics = diagnostics;
+    }
+
+    public SourceText Source { get; }
+
+    public IReadOnlyList<SyntaxToken> Tokens { get; }
+
+    public IReadOnlyList<StatementSyntax> Statements { get; }
+
+    public IReadOnlyList<Diagnostic> Diagnostics { get; }
+
+    /// <summary>The text again, from the tokens: equal to the source for every input.</summary>
+    public string Print()
+    {
+        var sb = new System.Text.StringBuilder(Source.Length);
+        foreach (var t in Tokens) sb.Append(Source.Text, t.Start, t.Length);
+        return sb.ToString();
+    }
+
+    /// <summary>Parses sheet text; never throws.</summary>
+    public static SheetSyntax Parse(string text, string? path = null) => Parsing.SheetParser.Parse(new SourceText(text, path));
+
+    public static SheetSyntax Parse(SourceText source) => Parsing.SheetParser.Parse(source);
+}

@@ -1,0 +1,77 @@
+using Superpower.Display;
+
+namespace CutSheet.Language.Syntax;
+
+/// <summary>The kinds of token. Examples make parser error messages read well.</summary>
+public enum TokenKind
+{
+    None,
+
+    // Trivia: kept so that the tokens reproduce the text exactly.
+    Whitespace,
+    [Token(Description = "line break")] TriviaNewline,
+    [Token(Description = "comment")] Comment,
+
+    [Token(Description = "end of line")] Newline,
+    [Token(Description = "heading")] Heading,
+    [Token(Description = "number")] Number,
+    [Token(Description = "unit")] Unit,
+    [Token(Description = "name")] Identifier,
+    [Token(Description = "text in quotes")] String,
+    [Token(Description = "character that is not part of the language")] Error,
+
+    [Token(Example = "+")] Plus,
+    [Token(Example = "-")] Minus,
+    [Token(Example = "*")] Star,
+    [Token(Example = "/")] Slash,
+    [Token(Example = "^")] Caret,
+    [Token(Description = "superscript power")] SuperscriptPower,
+    [Token(Example = "(")] LParen,
+    [Token(Example = ")")] RParen,
+    [Token(Example = "[")] LBracket,
+    [Token(Example = "]")] RBracket,
+    [Token(Example = ",")] Comma,
+    [Token(Example = ":")] Colon,
+    [Token(Example = "=")] Equals,
+    [Token(Example = "==")] EqualEqual,
+    [Token(Example = "!=")] NotEqual,
+    [Token(Example = "<")] Less,
+    [Token(Example = "<=")] LessEqual,
+    [Token(Example = ">")] Greater,
+    [Token(Example = ">=")] GreaterEqual,
+    [Token(Example = ".")] Dot,
+    [Token(Example = "|")] Bar,
+    [Token(Example = "±")] PlusMinus,
+
+    // Keywords (reserved words; see docs/language.md).
+    [Token(Category = "keyword", Example = "if")] If,
+    [Token(Category = "keyword", Example = "then")] Then,
+    [Token(Category = "keyword", Example = "else")] Else,
+    [Token(Category = "keyword", Example = "and")] And,
+    [Token(Category = "keyword", Example = "or")] Or,
+    [Token(Category = "keyword", Example = "not")] Not,
+    [Token(Category = "keyword", Example = "as")] As,
+    [Token(Category = "keyword", Example = "use")] Use,
+    [Token(Category = "keyword", Example = "with")] With,
+    [Token(Category = "keyword", Example = "check")] Check,
+    [Token(Category = "keyword", Example = "within")] Within,
+    [Token(Category = "keyword", Example = "notice")] Notice,
+    [Token(Category = "keyword", Example = "caution")] Caution,
+    [Token(Category = "keyword", Example = "warning")] Warning,
+    [Token(Category = "keyword", Example = "when")] When,
+    [Token(Category = "keyword", Example = "accepted")] Accepted,
+    [Token(Category = "keyword", Example = "assumed")] Assumed,
+    [Token(Category = "keyword", Example = "source")] Source,
+    [Token(Category = "keyword", Example = "sheet")] Sheet,
+    [Token(Category = "keyword", Example = "display")] Display,
+    [Token(Category = "keyword", Example = "valid")] Valid,
+    [Token(Category = "keyword", Example = "require")] Require,
+    [Token(Category = "keyword", Example = "where")] Where,
+    [Token(Category = "keyword", Example = "choice")] Choice,
+    [Token(Category = "keyword", Example = "table")] Table,
+    [Token(Category = "keyword", Example = "row")] Row,
+    [Token(Category = "keyword", Example = "from")] From,
+    [Token(Category = "keyword", Example = "to")] To,
+    [Token(Category = "keyword", Example = "true")] True,
+    [Token(Category = "keyword", Example = "false")] False,
+}
