@@ -31,6 +31,9 @@ internal static class CuratedUnits
         ["ReactivePower"] = "reactive volt-amperes are not mechanical power",
         ["Frequency.RadianPerSecond"] = "UnitsNet reads rad/s as 1/(2π) Hz; rad/s is an angular velocity here",
         ["Frequency.BUnit"] = "not a frequency unit of the trade",
+        ["Compressibility"] = "UnitsNet 5.75.1 states the inverse-pressure factors upside down (1/atm as 101325 Pa⁻¹)",
+        ["Volume.KilocubicMeter"] = "its symbol km³ reads as (km)³ = 10⁹ m³ but UnitsNet means 1000 m³",
+        ["Volume.HectocubicMeter"] = "its symbol hm³ reads as (hm)³ = 10⁶ m³ but UnitsNet means 100 m³",
     };
 
     /// <summary>
@@ -69,7 +72,6 @@ internal static class CuratedUnits
         ["cal"] = ("Energy.Calorie", "thermochemical calorie"),
         ["gal"] = ("Volume.UsGallon", "US liquid gallon"),
         ["ton"] = ("Mass.ShortTon", "US short ton of mass (2000 lb), as GNU units reads it"),
-        ["hp"] = ("Power.MechanicalHorsepower", "mechanical horsepower (550 ft·lbf/s), the US machine-tool rating"),
     };
 
     /// <summary>
@@ -97,6 +99,32 @@ internal static class CuratedUnits
         // NIST SP 811 (2008) App. B: psi = 6894.757 Pa (lbf/in², exact ratio).
         ["Pressure.PoundForcePerSquareInch"] = 4.4482216152605 / (0.0254 * 0.0254),
         ["Pressure.KilopoundForcePerSquareInch"] = 4448.2216152605 / (0.0254 * 0.0254),
+        // NIST SP 811 (2008) App. B: pound = 0.453 592 37 kg and inch = 0.0254 m exactly, so these are exact products.
+        ["MassMomentOfInertia.PoundSquareInch"] = 0.45359237 * 0.0254 * 0.0254,
+        ["MassMomentOfInertia.PoundSquareFoot"] = 0.45359237 * 0.3048 * 0.3048,
+        ["MassMomentOfInertia.SlugSquareFoot"] = 4.4482216152605 / 0.3048 * 0.3048 * 0.3048,
+        ["Density.PoundPerCubicInch"] = 0.45359237 / (0.0254 * 0.0254 * 0.0254),
+        ["Density.PoundPerCubicFoot"] = 0.45359237 / (0.3048 * 0.3048 * 0.3048),
+        ["ForcePerLength.PoundForcePerInch"] = 4.4482216152605 / 0.0254,
+        ["ForcePerLength.PoundForcePerFoot"] = 4.4482216152605 / 0.3048,
+        // NIST SP 811 (2008) App. B: horsepower, boiler = 9.809 50 kW; technical atmosphere = 1 kgf/cm² = 98 066.5 Pa;
+        // torr = 101 325/760 Pa; millimetre of mercury (conventional) = 133.322 387 415 Pa; inch of mercury (conventional) = 3386.389 Pa.
+        ["Power.BoilerHorsepower"] = 9809.5,
+        ["Pressure.TechnicalAtmosphere"] = 98066.5,
+        ["Pressure.KilogramForcePerSquareMeter"] = 9.80665,
+        ["Pressure.KilogramForcePerSquareCentimeter"] = 98066.5,
+        ["Pressure.KilogramForcePerSquareMillimeter"] = 9806650,
+        ["Pressure.Torr"] = 101325.0 / 760,
+        ["Pressure.MillimeterOfMercury"] = 133.322387415,
+        ["Pressure.InchOfMercury"] = 133.322387415 * 25.4,
+        // SI Brochure (9th ed., 2019): the elementary charge is exact, so 1 eV = 1.602 176 634 × 10⁻¹⁹ J.
+        ["Energy.ElectronVolt"] = 1.602176634e-19,
+        ["Energy.KiloelectronVolt"] = 1.602176634e-16,
+        ["Energy.MegaelectronVolt"] = 1.602176634e-13,
+        ["Energy.GigaelectronVolt"] = 1.602176634e-10,
+        ["Energy.TeraelectronVolt"] = 1.602176634e-7,
+        // NIST SP 811 (2008) App. B: square foot per second = 0.092 903 04 m²/s (exact).
+        ["KinematicViscosity.SquareFootPerSecond"] = 0.3048 * 0.3048,
         // ISO 80000-3: degree = π/180 rad exactly.
         ["Angle.Degree"] = Math.PI / 180,
     };
@@ -163,7 +191,8 @@ internal static class CuratedUnits
         ("sfpm", "surface feet per minute", 1, "ft/min", null),
         ("fpm", "feet per minute", 1, "ft/min", null),
 
-        // Forces and power.
+        // Forces and power. UnitsNet has no plain hp; the trade's hp is the mechanical one (NIST SP 811: 745.699 871 58 W).
+        ("hp", "mechanical horsepower (550 ft·lbf/s), the US machine-tool rating", 550 * 0.3048 * 4.4482216152605, "W", null),
         ("kip", "kilopound-force (1000 lbf)", 1000, "lbf", null),
         ("kp", "kilopond (= kgf)", 1, "kgf", null),
         ("hp_e", "electrical horsepower (746 W exactly)", 746, "W", null),
