@@ -54,8 +54,9 @@ public static class DisplayUnits
     public static ResolvedUnit? Choose(double si, Dimension dimension, Kind? tag, UnitSystem system)
     {
         if (dimension.IsNone) return null;
-        // Counts left over in a product (π·D·n keeps a revolution) are dimension one: show the kind without them.
-        var kind = tag ?? Kinds.Infer(dimension) ?? Kinds.Infer(WithoutCounts(dimension));
+        // Counts and angles left over in a product (π·D·n is an angle times a length per time) are dimension
+        // one: show the kind without them.
+        var kind = tag ?? Kinds.Infer(dimension) ?? Kinds.Infer(WithoutCounts(dimension)) ?? Kinds.Infer(dimension.Si);
         if (kind is not null && Ladders.TryGetValue(kind.Name, out var ladder))
         {
             var units = system == UnitSystem.Inch ? ladder.Inch : ladder.Metric;

@@ -54,7 +54,29 @@ internal sealed partial class ExpressionEvaluator
             if (acc.IsUnknown) return acc;
         }
         if (!f.CheckOnly) RotationTraps(root, operands, values, acc, f);
-        return acc;
+        return PiTurnsRevolutionsIntoRadians(operands, acc);
+    }
+
+    /// <summary>
+    /// ISO 80000-3 writes ω = 2π·n: the factor 2π is what turns revolutions into radians. So in a
+    /// product that multiplies by π, each π takes one revolution over into a radian (the number
+    /// is already right), and 2·pi·n is an angular velocity, 2·pi·n·T a power, π·D·n an arc
+    /// length per time. Without this, 2·pi·n would still count revolutions and show 2π too large.
+    /// </summary>
+    private static Value PiTurnsRevolutionsIntoRadians(List<(bool Divide, ExpressionSyntax Syntax)> operands, Value acc)
+    {
+        int up = 0, down = 0;
+        foreach (var (divide, syntax) in operands)
+        {
+            if (syntax is NameSyntax { Qualifier: null, Name: "pi" or "π" }) { if (divide) down++; else up++; }
+        }
+        if (up == 0 && down == 0) return acc;
+        var (dim, tag) = DimensionOf(acc);
+        int rev = dim[Dimension.Rev];
+        int k = rev > 0 ? Math.Min(up, rev) : rev < 0 ? -Math.Min(down, -rev) : 0;
+        if (k == 0) return acc;
+        var moved = dim / Dimension.Of(Dimension.Rev, k) * Dimension.Of(Dimension.Angle, k);
+        return acc.Kind == ValueKind.List ? Value.Of(acc.List! with { Dimension = moved }) : Value.Of(new Quantity(acc.Quantity.Si, moved, tag));
     }
 
     private void RotationTraps(BinarySyntax root, List<(bool Divide, ExpressionSyntax Syntax)> operands, Value[] values, Value result, EvalFrame f)
@@ -132,8 +154,13 @@ internal sealed partial class ExpressionEvaluator
         int a = from[Dimension.Angle], b = from[Dimension.Rev], cc = to[Dimension.Angle], dd = to[Dimension.Rev];
         if (a == cc && b == dd) return 1;
         if (a + b == cc + dd) return Math.Pow(2 * Math.PI, b - dd);
-        if (a > cc) Warn(f, DiagnosticCodes.AngleWithout2Pi, c.Unit.Span, DiagnosticMessages.AngleDropped);
-        else if (a < cc) Warn(f, DiagnosticCodes.AngleWithout2Pi, c.Unit.Span, DiagnosticMessages.AngleInserted);
+        // rad = 1 in SI, so an angle may come and go (an arc length r·θ is a length); only between a
+        // frequency and an angular velocity does that hide a factor 2π worth a warning.
+        if (from.SiEquals(Dimension.FromSi(0, 0, -1)))
+        {
+            if (a > cc) Warn(f, DiagnosticCodes.AngleWithout2Pi, c.Unit.Span, DiagnosticMessages.AngleDropped);
+            else if (a < cc) Warn(f, DiagnosticCodes.AngleWithout2Pi, c.Unit.Span, DiagnosticMessages.AngleInserted);
+        }
         return 1;
     }
 }

@@ -88,18 +88,37 @@ internal sealed partial class ExpressionEvaluator
         {
             foreach (var note in unit.Notes) Warn(f, DiagnosticCodes.ShopSpelling, q.Unit.Span, note, severity: Severity.Information);
         }
-        if (!f.Foreign && _top.Find(q.Unit.Text) is DefinitionSymbol && IsPlainSymbol(q.Unit.Text))
+        if (!f.Foreign && !f.CheckOnly)
         {
-            var fix = new Fix($"multiply: {q.NumberText} * {q.Unit.Text}", [new TextEdit(q.Span, $"{q.NumberText} * {q.Unit.Text}")]);
-            Warn(f, DiagnosticCodes.UnitAlsoName, q.Unit.Span, DiagnosticMessages.UnitAlsoName(q.Unit.Text), fix);
+            foreach (var symbol in SymbolsOf(q.Unit.Text))
+            {
+                if (_top.Find(symbol) is not DefinitionSymbol) continue;
+                var fix = IsWord(q.Unit.Text)
+                    ? new Fix($"multiply: {q.NumberText} * {q.Unit.Text}", [new TextEdit(q.Span, $"{q.NumberText} * {q.Unit.Text}")])
+                    : null;
+                Warn(f, DiagnosticCodes.UnitAlsoName, q.Unit.Span, DiagnosticMessages.UnitAlsoName(symbol), fix);
+            }
         }
         return Value.Of(new Quantity(unit.ToSi(q.Number), unit.Dimension, unit.Tag));
     }
 
-    private static bool IsPlainSymbol(string text)
+    private static bool IsWord(string text)
     {
         foreach (char c in text) if (!(char.IsLetterOrDigit(c) || c == '_')) return false;
         return true;
+    }
+
+    /// <summary>The symbols of unit text: <c>N*t</c> gives N and t.</summary>
+    private static IEnumerable<string> SymbolsOf(string unitText)
+    {
+        int i = 0;
+        while (i < unitText.Length)
+        {
+            if (!char.IsLetter(unitText[i]) && unitText[i] != '_') { i++; continue; }
+            int start = i;
+            while (i < unitText.Length && (char.IsLetterOrDigit(unitText[i]) || unitText[i] == '_')) i++;
+            yield return unitText[start..i];
+        }
     }
 
     private Value UnitError(UnitSyntax unit, UnitError error, EvalFrame f)
@@ -108,7 +127,7 @@ internal sealed partial class ExpressionEvaluator
         if (error.Code == DiagnosticCodes.UnknownUnit)
         {
             string symbol = unit.Text.Substring(Math.Min(error.Offset, unit.Text.Length), Math.Min(error.Length, unit.Text.Length - Math.Min(error.Offset, unit.Text.Length)));
-            if (unit.Text == symbol && f.Scope.Find(symbol) is not null)
+            if (unit.Text == symbol && (f.Scope.Find(symbol) is not null || Builtins.Constants.ContainsKey(symbol)))
             {
                 return Error(f, DiagnosticCodes.NameAfterNumber, unit.Span, DiagnosticMessages.NameAfterNumber(symbol),
                     new Fix($"write * {symbol}", [new TextEdit(new TextSpan(unit.Span.Start, 0), "* ")]));

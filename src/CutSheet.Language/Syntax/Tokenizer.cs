@@ -253,7 +253,8 @@ public static class Tokenizer
     {
         int p = pos;
         while (p < text.Length && IsSpace(text[p])) p++;
-        if (!(UnitStartsAt(text, pos) || (afterAs && p < text.Length && text[p] == '('))) return;
+        bool reciprocal = afterAs && p + 1 < text.Length && text[p] == '1' && text[p + 1] == '/';
+        if (!(UnitStartsAt(text, pos) || reciprocal || (afterAs && p < text.Length && text[p] == '('))) return;
         if (p > pos) add(TokenKind.Whitespace, pos, p, TokenFlags.None);
         int start = p, parens = 0;
         while (p < text.Length)
