@@ -39,11 +39,12 @@ internal sealed class ValuePresenter(DisplaySettings settings, SheetScope scope)
         string? alternate = null;
         if (settings.Units == UnitSystem.Both && unit is not null)
         {
-            var inch = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, UnitSystem.Inch);
-            if (inch is not null && inch.Text != unit.Text)
+            // The other system: inch beside a metric unit, metric beside an inch unit.
+            var other = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, DisplayUnits.IsInchUnit(unit.Text) ? UnitSystem.Metric : UnitSystem.Inch);
+            if (other is not null && other.Text != unit.Text)
             {
-                string unitText = inch.Text;
-                alternate = NumberFormatter.Format(ConvertForDisplay(q, inch), d) + (unitText is "°" ? "" : " ") + unitText;
+                string unitText = other.Text;
+                alternate = NumberFormatter.Format(ConvertForDisplay(q, other), d) + (unitText is "°" ? "" : " ") + unitText;
             }
         }
         return new DisplayedValue(q, number, unit?.Text ?? "", text, alternate);

@@ -38,6 +38,9 @@ public static class Tokenizer
             if (c == '\r' || c == '\n')
             {
                 pos += c == '\r' && pos + 1 < text.Length && text[pos + 1] == '\n' ? 2 : 1;
+                // Inside brackets a statement continues on indented (or blank) lines; a line that
+                // starts at the margin is a new statement, so one unclosed bracket cannot swallow the sheet.
+                if (depth > 0 && pos < text.Length && !IsSpace(text[pos]) && text[pos] != '\n' && text[pos] != '\r') depth = 0;
                 Add(depth > 0 ? TokenKind.TriviaNewline : TokenKind.Newline, start, pos);
                 lineStart = true;
                 continue;
