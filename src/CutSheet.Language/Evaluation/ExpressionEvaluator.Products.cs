@@ -93,6 +93,13 @@ internal sealed partial class ExpressionEvaluator
 
     private void RotationTraps(BinarySyntax root, List<(bool Divide, ExpressionSyntax Syntax)> operands, Value[] values, Value result, EvalFrame f)
     {
+        bool anyRotation = false;
+        foreach (var v in values)
+        {
+            var (d, _) = DimensionOf(v);
+            if (d[Dimension.Rev] != 0 || d[Dimension.Angle] != 0) { anyRotation = true; break; }
+        }
+        if (!anyRotation) return;
         var (rd, _) = DimensionOf(result);
         bool torque = false, rotational = false, length = false, namedNumber = false;
         int perRev = -1, angle = -1;
@@ -108,15 +115,13 @@ internal sealed partial class ExpressionEvaluator
             if (d[Dimension.Rev] < 0) perRev = i;
             if (d[Dimension.Angle] > 0) angle = i;
         }
-        if (f.MentionsPi) { torque = false; length = false; }
-        var insert2Pi = new Fix("multiply by 2 * pi", [new TextEdit(new TextSpan(root.Span.Start, 0), "2 * pi * ")]);
-        if (torque && rotational && rd[Dimension.Rev] > 0)
+        if (rotational && rd[Dimension.Rev] > 0 && (torque || length) && !f.MentionsPi)
         {
-            Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, insert2Pi);
-        }
-        else if (length && rotational && rd[Dimension.Rev] > 0 && rd.SiEquals(Dimension.FromSi(1, 0, -1)) && !namedNumber)
-        {
-            Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, insert2Pi);
+            var insert2Pi = new Fix("multiply by 2 * pi", [new TextEdit(new TextSpan(root.Span.Start, 0), "2 * pi * ")]);
+            if (torque)
+                Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, insert2Pi);
+            else if (rd.SiEquals(Dimension.FromSi(1, 0, -1)) && !namedNumber)
+                Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, insert2Pi);
         }
         if (perRev >= 0 && angle >= 0)
         {
