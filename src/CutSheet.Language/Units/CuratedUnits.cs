@@ -34,6 +34,8 @@ internal static class CuratedUnits
         ["Compressibility"] = "UnitsNet 5.75.1 states the inverse-pressure factors upside down (1/atm as 101325 Pa⁻¹)",
         ["Volume.KilocubicMeter"] = "its symbol km³ reads as (km)³ = 10⁹ m³ but UnitsNet means 1000 m³",
         ["Volume.HectocubicMeter"] = "its symbol hm³ reads as (hm)³ = 10⁶ m³ but UnitsNet means 100 m³",
+        ["Volume.KilocubicFoot"] = "its symbol kft³ reads as (kft)³ but UnitsNet means 1000 ft³",
+        ["Volume.MegacubicFoot"] = "its symbol Mft³ reads as (Mft)³ but UnitsNet means 10⁶ ft³",
     };
 
     /// <summary>
@@ -70,8 +72,6 @@ internal static class CuratedUnits
         ["mi"] = ("Length.Mile", "statute mile"),
         ["kn"] = ("Speed.Knot", "knot"),
         ["cal"] = ("Energy.Calorie", "thermochemical calorie"),
-        ["gal"] = ("Volume.UsGallon", "US liquid gallon"),
-        ["ton"] = ("Mass.ShortTon", "US short ton of mass (2000 lb), as GNU units reads it"),
     };
 
     /// <summary>
@@ -216,6 +216,11 @@ internal static class CuratedUnits
         ("lb·in·s^2", "pound-force inch second squared (inertia)", 1, "lbf·in·s²", "lb·in·s^2 is read as lbf·in·s²: an inertia, 386.09 lb·in²"),
         ("oz·in·s²", "ounce-force inch second squared (inertia)", 1, "ozf·in·s²", "oz·in·s² is read as ozf·in·s²: an inertia"),
         ("oz·in·s^2", "ounce-force inch second squared (inertia)", 1, "ozf·in·s²", "oz·in·s^2 is read as ozf·in·s²: an inertia"),
+
+        // Volumes and masses UnitsNet spells only with spaces ("gal (U.S.)", "t (short)").
+        ("L", "litre (SI Brochure: L and l are both accepted)", 0.001, "m³", null),
+        ("gal", "US liquid gallon (231 in³, NIST SP 811)", 231, "in³", null),
+        ("ton", "short ton of mass (2000 lb), as GNU units reads it", 2000, "lb", null),
 
         // Ratios.
         ("‰", "per mille", 0.001, "1", null),

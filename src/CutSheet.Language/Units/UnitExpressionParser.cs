@@ -29,12 +29,36 @@ internal ref struct UnitExpressionParser
         string text = UnitText.Normalize(raw);
         if (text.Length == 0) return new UnitResolution(null, new UnitError(DiagnosticCodes.MalformedUnit, DiagnosticMessages.EmptyUnit, 0, 0));
         var whole = catalog.Lookup(text);
+        if (whole is not null && (whole.Origin == "curated" || !IsCompound(text)))
+        {
+            return FromDefinition(raw, whole);
+        }
         if (whole is not null)
         {
-            return new UnitResolution(new ResolvedUnit(raw, whole.Factor, whole.Offset, whole.Dimension, whole.Tag,
-                whole.Note is null ? [] : [whole.Note]), null);
+            // A compound symbol UnitsNet stores whole (lb/ft, slug/m³, mm³/kg) is read from its parts:
+            // the parts' factors are exact where UnitsNet's stored products are truncated, and the parts
+            // are what the text says. The whole row still lends its kind (N·m is a torque).
+            var composed = ParseParts(raw, text, catalog);
+            if (composed.Unit is not null) return new UnitResolution(composed.Unit with { Tag = whole.Tag }, null);
+            return FromDefinition(raw, whole);
         }
+        return ParseParts(raw, text, catalog);
+    }
 
+    private static bool IsCompound(string text)
+    {
+        foreach (char c in text)
+        {
+            if (c is '/' or '·' or '^' or '(' || Superscript.IsSuperscriptChar(c)) return true;
+        }
+        return false;
+    }
+
+    private static UnitResolution FromDefinition(string raw, UnitDefinition def) =>
+        new(new ResolvedUnit(raw, def.Factor, def.Offset, def.Dimension, def.Tag, def.Note is null ? [] : [def.Note]), null);
+
+    private static UnitResolution ParseParts(string raw, string text, UnitCatalog catalog)
+    {
         var p = new UnitExpressionParser(text, catalog);
         var (factor, dim) = p.ParseProduct();
         if (p._error is null && p._pos < text.Length)
