@@ -101,8 +101,12 @@ internal sealed partial class ExpressionEvaluator
             return Error(f, DiagnosticCodes.KindMismatch, b.OperatorSpan, DiagnosticMessages.KindMismatch(verb, lt.Name, rt.Name));
         }
         var tag = lt ?? rt;
-        double sign = op == BinaryOperator.Add ? 1 : -1;
-        return Elementwise(f, b.Span, left, right, (x, y) => x + sign * y, ld, tag);
+        if (left.Kind == ValueKind.Quantity && right.Kind == ValueKind.Quantity)
+        {
+            double v = op == BinaryOperator.Add ? left.Quantity.Si + right.Quantity.Si : left.Quantity.Si - right.Quantity.Si;
+            return Finite(f, b.Span, v) ? Value.Of(new Quantity(v, ld, tag)) : Value.Unknown;
+        }
+        return Elementwise(f, b.Span, left, right, op == BinaryOperator.Add ? static (x, y) => x + y : static (x, y) => x - y, ld, tag);
     }
 
     /// <summary>Soft factors must agree: revolutions against radians is an error (2π apart); other counts only warn.</summary>

@@ -14,6 +14,15 @@ internal sealed partial class ExpressionEvaluator
     /// </summary>
     private Value Product(BinarySyntax root, EvalFrame f)
     {
+        if (root.Left is not BinarySyntax { Operator: BinaryOperator.Multiply or BinaryOperator.Divide }
+            && !IsPi(root.Left) && !IsPi(root.Right))
+        {
+            // The common case, a * b or a / b: no list to build unless rotation needs a look.
+            var l = Evaluate(root.Left, f);
+            var r = Evaluate(root.Right, f);
+            if (l.IsUnknown || r.IsUnknown) return Value.Unknown;
+            if (!HasRotation(l) && !HasRotation(r)) return MultiplyPair(root, l, r, f);
+        }
         var operands = new List<(bool Divide, ExpressionSyntax Syntax)>();
         ExpressionSyntax node = root;
         while (node is BinarySyntax { Operator: BinaryOperator.Multiply or BinaryOperator.Divide } bin)
@@ -34,23 +43,9 @@ internal sealed partial class ExpressionEvaluator
         if (unknown) return Value.Unknown;
 
         var acc = values[0];
-        if (acc.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, operands[0].Syntax.Span, "a quantity", acc);
         for (int i = 1; i < values.Length; i++)
         {
-            var v = values[i];
-            if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, operands[i].Syntax.Span, "a quantity", v);
-            var (ad, at) = DimensionOf(acc);
-            var (vd, vt) = DimensionOf(v);
-            bool divide = operands[i].Divide;
-            var dim = divide ? ad / vd : ad * vd;
-            // A plain number keeps the other side's kind (T / eta is still a torque).
-            Kind? tag = vd.IsNone ? at : ad.IsNone && !divide ? vt : null;
-            if (divide && !f.CheckOnly)
-            {
-                bool zero = v.Kind == ValueKind.Quantity ? v.Quantity.Si == 0 : v.List!.Values.Contains(0);
-                if (zero) return Error(f, DiagnosticCodes.DivisionByZero, operands[i].Syntax.Span, DiagnosticMessages.DivisionByZero);
-            }
-            acc = Elementwise(f, root.Span, acc, v, divide ? (x, y) => x / y : (x, y) => x * y, dim, tag);
+            acc = Multiply(root, acc, operands[i - 1].Syntax, values[i], operands[i].Syntax, operands[i].Divide, f);
             if (acc.IsUnknown) return acc;
         }
         if (!f.CheckOnly) RotationTraps(root, operands, values, acc, f);
@@ -89,6 +84,39 @@ internal sealed partial class ExpressionEvaluator
             return acc;
         }
         return acc.Kind == ValueKind.List ? Value.Of(acc.List! with { Dimension = moved }) : Value.Of(new Quantity(acc.Quantity.Si, moved, tag));
+    }
+
+    private Value MultiplyPair(BinarySyntax root, Value l, Value r, EvalFrame f) =>
+        Multiply(root, l, root.Left, r, root.Right, root.Operator == BinaryOperator.Divide, f);
+
+    private Value Multiply(BinarySyntax root, Value acc, ExpressionSyntax accSyntax, Value v, ExpressionSyntax vSyntax, bool divide, EvalFrame f)
+    {
+        if (acc.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, accSyntax.Span, "a quantity", acc);
+        if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, vSyntax.Span, "a quantity", v);
+        var (ad, at) = DimensionOf(acc);
+        var (vd, vt) = DimensionOf(v);
+        var dim = divide ? ad / vd : ad * vd;
+        // A plain number keeps the other side's kind (T / eta is still a torque).
+        Kind? tag = vd.IsNone ? at : ad.IsNone && !divide ? vt : null;
+        if (divide && !f.CheckOnly)
+        {
+            bool zero = v.Kind == ValueKind.Quantity ? v.Quantity.Si == 0 : v.List!.Values.Contains(0);
+            if (zero) return Error(f, DiagnosticCodes.DivisionByZero, vSyntax.Span, DiagnosticMessages.DivisionByZero);
+        }
+        if (acc.Kind == ValueKind.Quantity && v.Kind == ValueKind.Quantity)
+        {
+            double x = divide ? acc.Quantity.Si / v.Quantity.Si : acc.Quantity.Si * v.Quantity.Si;
+            return Finite(f, root.Span, x) ? Value.Of(new Quantity(x, dim, tag)) : Value.Unknown;
+        }
+        return Elementwise(f, root.Span, acc, v, divide ? static (x, y) => x / y : static (x, y) => x * y, dim, tag);
+    }
+
+    private static bool IsPi(ExpressionSyntax e) => e is NameSyntax { Qualifier: null, Name: "pi" or "π" };
+
+    private static bool HasRotation(Value v)
+    {
+        var (d, _) = DimensionOf(v);
+        return d[Dimension.Rev] != 0 || d[Dimension.Angle] != 0;
     }
 
     private void RotationTraps(BinarySyntax root, List<(bool Divide, ExpressionSyntax Syntax)> operands, Value[] values, Value result, EvalFrame f)
