@@ -50,6 +50,26 @@ public static class DisplayUnits
         ["torsional_stiffness"] = (["N·m/rad"], ["lbf·in/rad"]),
     };
 
+    private static readonly HashSet<string> InchSymbols = new(StringComparer.Ordinal)
+    {
+        "in", "inch", "inches", "ft", "foot", "feet", "yd", "mi", "thou", "mil", "tenth", "tenths", "lb", "lbm", "lbf", "oz", "ozf", "kip", "slug",
+        "psi", "ksi", "hp", "sfm", "sfpm", "fpm", "ipm", "ipr", "ipt", "tpi", "gal", "Btu", "BTU",
+    };
+
+    /// <summary>True when unit text is written with inch-system symbols (in, lbf, psi, hp, sfm…).</summary>
+    public static bool IsInchUnit(string unitText)
+    {
+        int i = 0;
+        while (i < unitText.Length)
+        {
+            if (!char.IsLetter(unitText[i])) { i++; continue; }
+            int start = i;
+            while (i < unitText.Length && (char.IsLetter(unitText[i]) || unitText[i] == '_')) i++;
+            if (InchSymbols.Contains(unitText[start..i])) return true;
+        }
+        return false;
+    }
+
     /// <summary>The unit to show a quantity in, or null for a plain number.</summary>
     public static ResolvedUnit? Choose(double si, Dimension dimension, Kind? tag, UnitSystem system)
     {

@@ -6,6 +6,8 @@ namespace CutSheet.Language.Evaluation;
 /// <summary>Collects the diagnostics and fired cautions of the statement being evaluated.</summary>
 internal sealed class DiagnosticSink
 {
+    private readonly HashSet<(string Code, int Start, int Length, string Message, string? Path)> _seen = [];
+
     public List<Diagnostic> Diagnostics { get; } = [];
     public List<CautionResult> Cautions { get; } = [];
 
@@ -15,17 +17,14 @@ internal sealed class DiagnosticSink
     public void BeginStatement()
     {
         StatementHasError = false;
-        Cautions.Clear();
+        if (Cautions.Count > 0) Cautions.Clear();
     }
 
     public void Report(Diagnostic diagnostic)
     {
         if (diagnostic.Severity == Severity.Error) StatementHasError = true;
         // One report per code and place: a formula evaluated twice (a branch check) must not repeat itself.
-        foreach (var d in Diagnostics)
-        {
-            if (d.Code == diagnostic.Code && d.Span == diagnostic.Span && d.Message == diagnostic.Message && d.Path == diagnostic.Path) return;
-        }
+        if (!_seen.Add((diagnostic.Code, diagnostic.Span.Start, diagnostic.Span.Length, diagnostic.Message, diagnostic.Path))) return;
         Diagnostics.Add(diagnostic);
     }
 }

@@ -61,7 +61,7 @@ internal sealed partial class ExpressionEvaluator
     /// ISO 80000-3 writes ω = 2π·n: the factor 2π is what turns revolutions into radians. So in a
     /// product that multiplies by π, each π takes one revolution over into a radian (the number
     /// is already right), and 2·pi·n is an angular velocity, 2·pi·n·T a power, π·D·n an arc
-    /// length per time. Without this, 2·pi·n would still count revolutions and show 2π too large.
+    /// length per time; dividing a per-revolution quantity by π leaves a plain one. Without this, 2·pi·n would still count revolutions and show 2π too large.
     /// </summary>
     private static Value PiTurnsRevolutionsIntoRadians(List<(bool Divide, ExpressionSyntax Syntax)> operands, Value acc)
     {
@@ -73,14 +73,33 @@ internal sealed partial class ExpressionEvaluator
         if (up == 0 && down == 0) return acc;
         var (dim, tag) = DimensionOf(acc);
         int rev = dim[Dimension.Rev];
-        int k = rev > 0 ? Math.Min(up, rev) : rev < 0 ? -Math.Min(down, -rev) : 0;
-        if (k == 0) return acc;
-        var moved = dim / Dimension.Of(Dimension.Rev, k) * Dimension.Of(Dimension.Angle, k);
+        Dimension moved;
+        if (rev > 0 && up > 0)
+        {
+            int k = Math.Min(up, rev);
+            moved = dim / Dimension.Of(Dimension.Rev, k) * Dimension.Of(Dimension.Angle, k);
+        }
+        else if (rev < 0 && down > 0)
+        {
+            // P_h/(2π) is a length per radian, and rad = 1: T = F·P_h/(2π) is a plain torque, not N·m/rad.
+            moved = dim * Dimension.Of(Dimension.Rev, Math.Min(down, -rev));
+        }
+        else
+        {
+            return acc;
+        }
         return acc.Kind == ValueKind.List ? Value.Of(acc.List! with { Dimension = moved }) : Value.Of(new Quantity(acc.Quantity.Si, moved, tag));
     }
 
     private void RotationTraps(BinarySyntax root, List<(bool Divide, ExpressionSyntax Syntax)> operands, Value[] values, Value result, EvalFrame f)
     {
+        bool anyRotation = false;
+        foreach (var v in values)
+        {
+            var (d, _) = DimensionOf(v);
+            if (d[Dimension.Rev] != 0 || d[Dimension.Angle] != 0) { anyRotation = true; break; }
+        }
+        if (!anyRotation) return;
         var (rd, _) = DimensionOf(result);
         bool torque = false, rotational = false, length = false, namedNumber = false;
         int perRev = -1, angle = -1;
@@ -96,15 +115,13 @@ internal sealed partial class ExpressionEvaluator
             if (d[Dimension.Rev] < 0) perRev = i;
             if (d[Dimension.Angle] > 0) angle = i;
         }
-        if (f.MentionsPi) { torque = false; length = false; }
-        var insert2Pi = new Fix("multiply by 2 * pi", [new TextEdit(new TextSpan(root.Span.Start, 0), "2 * pi * ")]);
-        if (torque && rotational && rd[Dimension.Rev] > 0)
+        if (rotational && rd[Dimension.Rev] > 0 && (torque || length) && !f.MentionsPi)
         {
-            Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, insert2Pi);
-        }
-        else if (length && rotational && rd[Dimension.Rev] > 0 && rd.SiEquals(Dimension.FromSi(1, 0, -1)) && !namedNumber)
-        {
-            Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, insert2Pi);
+            var insert2Pi = new Fix("multiply by 2 * pi", [new TextEdit(new TextSpan(root.Span.Start, 0), "2 * pi * ")]);
+            if (torque)
+                Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, insert2Pi);
+            else if (rd.SiEquals(Dimension.FromSi(1, 0, -1)) && !namedNumber)
+                Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, insert2Pi);
         }
         if (perRev >= 0 && angle >= 0)
         {

@@ -14,11 +14,12 @@ internal sealed partial class ExpressionEvaluator
         var checkFrame = new EvalFrame
         {
             Scope = f.Scope, Locals = f.Locals, Depth = f.Depth, CheckOnly = true, CallSite = f.CallSite, Foreign = f.Foreign,
-            Function = f.Function, MentionsPi = f.MentionsPi,
+            Function = f.Function, Formula = f.Formula, RecordDependencies = f.RecordDependencies,
         };
         bool known = !condition.IsUnknown;
         var a = Evaluate(c.Then, known && condition.Boolean ? f : checkFrame);
         var b = Evaluate(c.Else, known && !condition.Boolean ? f : checkFrame);
+        if (checkFrame.DependsOnSheet) f.DependsOnSheet = true;
         if (a.Kind is ValueKind.Quantity or ValueKind.List && b.Kind is ValueKind.Quantity or ValueKind.List)
         {
             var (ad, _) = DimensionOf(a);

@@ -92,7 +92,7 @@ internal sealed partial class ExpressionEvaluator
         {
             foreach (var symbol in SymbolsOf(q.Unit.Text))
             {
-                if (_top.Find(symbol) is not DefinitionSymbol) continue;
+                if (!_top.Definitions.ContainsKey(symbol) && !(_top.Imported.TryGetValue(symbol, out var i) && i.Symbol is DefinitionSymbol)) continue;
                 var fix = IsWord(q.Unit.Text)
                     ? new Fix($"multiply: {q.NumberText} * {q.Unit.Text}", [new TextEdit(q.Span, $"{q.NumberText} * {q.Unit.Text}")])
                     : null;
@@ -159,7 +159,7 @@ internal sealed partial class ExpressionEvaluator
                     if (ReferenceEquals(f.Scope, _top) || d.Path == _top.Path) return UsedBeforeDefinition(n, d, f);
                     return Value.Unknown;
                 }
-                if (ReferenceEquals(f.Scope, _top)) f.Dependencies?.Add(d);
+                if (f.RecordDependencies && ReferenceEquals(f.Scope, _top)) f.DependsOnSheet = true;
                 return d.Value;
             case ChoiceOption o:
                 return Value.Of(o);

@@ -29,7 +29,8 @@ internal sealed partial class SheetEvaluator
                 HeadingSyntax h => new HeadingResult(h, line),
                 _ => new OtherStatementResult(statement, line),
             };
-            results.Add(result with { Cautions = FinishCautions(statement) });
+            var cautions = FinishCautions(statement);
+            results.Add(cautions.Count == 0 ? result : result with { Cautions = cautions });
         }
         foreach (var name in overrides.Keys)
         {
@@ -61,6 +62,7 @@ internal sealed partial class SheetEvaluator
 
     private void CheckClauses(StatementSyntax statement)
     {
+        if (statement.Clauses.Keywords.Count == 0) return;
         string[] allowed = statement switch
         {
             DefinitionSyntax => ["assumed", "source", "accepted"],

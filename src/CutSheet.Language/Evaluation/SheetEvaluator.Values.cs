@@ -14,16 +14,14 @@ internal sealed partial class SheetEvaluator
 
     private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
     {
-        var deps = new HashSet<DefinitionSymbol>();
-        var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, MentionsPi = PiScanner.Mentions(d.Value), Dependencies = deps };
+        var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, Formula = d.Value, RecordDependencies = true };
         var value = _eval.Evaluate(d.Value, frame);
         var clauses = d.Clauses;
         if (!_scope.Definitions.TryGetValue(d.Name, out var symbol) || symbol.Syntax != d)
         {
             return new DefinitionResult(d, line, d.Name, null, null, false, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value, false);
         }
-        symbol.IsInput = deps.Count == 0;
-        _dependencies[symbol] = deps;
+        symbol.IsInput = !frame.DependsOnSheet;
         bool overridden = false;
         if (overrides.TryGetValue(d.Name, out var o))
         {
@@ -63,11 +61,11 @@ internal sealed partial class SheetEvaluator
                 kind = "list of " + (Units.Kinds.Infer(value.List.Dimension)?.Name ?? value.List.Dimension.ToString());
                 break;
             case ValueKind.Boolean:
-                shown = ValuePresenter.PresentOther(value);
+                shown = Presenter.PresentOther(value);
                 kind = "boolean";
                 break;
             case ValueKind.Choice:
-                shown = ValuePresenter.PresentOther(value);
+                shown = Presenter.PresentOther(value);
                 kind = value.Choice!.Type.Name;
                 break;
         }
@@ -97,7 +95,7 @@ internal sealed partial class SheetEvaluator
             _sink.Report(Diagnostic.Error(DiagnosticCodes.NotAComparison, c.Condition.Span, DiagnosticMessages.NotAComparison));
             return new CheckResult(c, line, CheckStatus.NotEvaluated, "?", null, null, null, null, description, "not a comparison");
         }
-        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span, MentionsPi = PiScanner.Mentions(c.Condition) };
+        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span, Formula = c.Condition };
         var outcome = _eval.Evaluate(c.Condition, frame);
         var left = _eval.Evaluate(cmp.Left, frame);
         var right = _eval.Evaluate(cmp.Right, frame);

@@ -25,7 +25,6 @@ internal sealed partial class SheetEvaluator
     private readonly ExpressionEvaluator _eval;
     private readonly Dictionary<string, string> _metadata = new(StringComparer.Ordinal);
     private readonly List<string> _importNames = [];
-    private readonly Dictionary<DefinitionSymbol, HashSet<DefinitionSymbol>> _dependencies = [];
     private int _currentLine;
     private DisplaySettings _display;
 

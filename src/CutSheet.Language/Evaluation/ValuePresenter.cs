@@ -35,32 +35,28 @@ internal sealed class ValuePresenter(DisplaySettings settings, SheetScope scope)
     {
         int d = digits ?? settings.Digits;
         double number = unit is null ? q.Si : ConvertForDisplay(q, unit);
-        string text = NumberFormatter.Format(number, d);
-        string? alternate = null;
         if (settings.Units == UnitSystem.Both && unit is not null)
         {
-            var inch = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, UnitSystem.Inch);
-            if (inch is not null && inch.Text != unit.Text)
-            {
-                string unitText = inch.Text;
-                alternate = NumberFormatter.Format(ConvertForDisplay(q, inch), d) + (unitText is "°" ? "" : " ") + unitText;
-            }
+            // The other system: inch beside a metric unit, metric beside an inch unit.
+            var other = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, DisplayUnits.IsInchUnit(unit.Text) ? UnitSystem.Metric : UnitSystem.Inch);
+            if (other is not null && other.Text != unit.Text)
+                return new DisplayedValue(q, number, unit.Text, d, other.Text, ConvertForDisplay(q, other));
         }
-        return new DisplayedValue(q, number, unit?.Text ?? "", text, alternate);
+        return new DisplayedValue(q, number, unit?.Text ?? "", d);
     }
 
-    public static DisplayedValue PresentOther(Value v) => v.Kind switch
+    public DisplayedValue PresentOther(Value v) => v.Kind switch
     {
-        ValueKind.Boolean => new DisplayedValue(default, double.NaN, "", v.Boolean ? "true" : "false", null),
-        ValueKind.Choice => new DisplayedValue(default, double.NaN, "", v.Choice!.Name, null),
-        _ => new DisplayedValue(default, double.NaN, "", "unknown", null),
+        ValueKind.Boolean => new DisplayedValue(default, double.NaN, "", settings.Digits, fixedText: v.Boolean ? "true" : "false"),
+        ValueKind.Choice => new DisplayedValue(default, double.NaN, "", settings.Digits, fixedText: v.Choice!.Name),
+        _ => new DisplayedValue(default, double.NaN, "", settings.Digits, fixedText: "unknown"),
     };
 
     public DisplayedValue PresentList(QuantityList list, ResolvedUnit? unit)
     {
         var items = list.Values.Take(20).Select(x => NumberFormatter.Format(unit is null ? x : ConvertForDisplay(new Quantity(x, list.Dimension), unit), settings.Digits));
         string text = "[" + string.Join(", ", items) + (list.Values.Length > 20 ? ", …" : "") + "]";
-        return new DisplayedValue(new Quantity(double.NaN, list.Dimension, list.Tag), double.NaN, unit?.Text ?? "", text, null);
+        return new DisplayedValue(new Quantity(double.NaN, list.Dimension, list.Tag), double.NaN, unit?.Text ?? "", settings.Digits, fixedText: text);
     }
 
     /// <summary>The number in a unit; revolutions and radians are bridged by 2π as in <c>as</c>.</summary>

@@ -38,6 +38,9 @@ public static class Tokenizer
             if (c == '\r' || c == '\n')
             {
                 pos += c == '\r' && pos + 1 < text.Length && text[pos + 1] == '\n' ? 2 : 1;
+                // Inside brackets a statement continues on indented (or blank) lines; a line that
+                // starts at the margin is a new statement, so one unclosed bracket cannot swallow the sheet.
+                if (depth > 0 && pos < text.Length && !IsSpace(text[pos]) && text[pos] != '\n' && text[pos] != '\r') depth = 0;
                 Add(depth > 0 ? TokenKind.TriviaNewline : TokenKind.Newline, start, pos);
                 lineStart = true;
                 continue;
@@ -94,7 +97,7 @@ public static class Tokenizer
             {
                 var flags = ReadNumber(text, ref pos, depth);
                 Add(TokenKind.Number, start, pos, flags);
-                TryReadUnit(text, ref pos, Add, afterAs: false);
+                AddUnit(text, ref pos, afterAs: false);
                 continue;
             }
 
@@ -112,7 +115,7 @@ public static class Tokenizer
                 if (Keywords.TryGet(word, out var keyword))
                 {
                     Add(keyword, start, pos);
-                    if (keyword == TokenKind.As) TryReadUnit(text, ref pos, Add, afterAs: true);
+                    if (keyword == TokenKind.As) AddUnit(text, ref pos, afterAs: true);
                     continue;
                 }
                 Add(TokenKind.Identifier, start, pos);
@@ -172,6 +175,14 @@ public static class Tokenizer
             Add(kind, start, pos);
         }
         return tokens.ToArray();
+
+        void AddUnit(string text, ref int pos, bool afterAs)
+        {
+            if (!TryReadUnit(text, pos, afterAs, out int unitStart, out int unitEnd)) return;
+            if (unitStart > pos) Add(TokenKind.Whitespace, pos, unitStart);
+            Add(TokenKind.Unit, unitStart, unitEnd, afterAs ? TokenFlags.AfterAs : TokenFlags.None);
+            pos = unitEnd;
+        }
     }
 
     private static TokenFlags ReadNumber(string text, ref int pos, int depth)
@@ -249,14 +260,15 @@ public static class Tokenizer
         return TokenFlags.None;
     }
 
-    private static void TryReadUnit(string text, ref int pos, Action<TokenKind, int, int, TokenFlags> add, bool afterAs)
+    /// <summary>Finds the unit that follows a number or <c>as</c>: contiguous unit characters after optional spaces.</summary>
+    private static bool TryReadUnit(string text, int pos, bool afterAs, out int start, out int end)
     {
         int p = pos;
         while (p < text.Length && IsSpace(text[p])) p++;
+        start = end = p;
         bool reciprocal = afterAs && p + 1 < text.Length && text[p] == '1' && text[p + 1] == '/';
-        if (!(UnitStartsAt(text, pos) || reciprocal || (afterAs && p < text.Length && text[p] == '('))) return;
-        if (p > pos) add(TokenKind.Whitespace, pos, p, TokenFlags.None);
-        int start = p, parens = 0;
+        if (!(UnitStartsAt(text, pos) || reciprocal || (afterAs && p < text.Length && text[p] == '('))) return false;
+        int parens = 0;
         while (p < text.Length)
         {
             char c = text[p];
@@ -273,9 +285,8 @@ public static class Tokenizer
         }
         // A unit never ends with an operator: "5 mm/ 2" leaves the slash to the expression.
         while (p > start && text[p - 1] is '/' or '*' or '·' or '⋅' or '∙' or '^' or '-' or '−' or '+' && parens == 0) p--;
-        if (p == start) return;
-        add(TokenKind.Unit, start, p, afterAs ? TokenFlags.AfterAs : TokenFlags.None);
-        pos = p;
+        end = p;
+        return p > start;
     }
 
     /// <summary>True when, after optional spaces, a unit begins at <paramref name="pos"/>.</summary>

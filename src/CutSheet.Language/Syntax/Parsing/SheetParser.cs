@@ -1,6 +1,7 @@
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Text;
+using Superpower;
 using Superpower.Model;
 using TextSpan = CutSheet.Language.Text.TextSpan;
 
@@ -87,7 +88,11 @@ internal static class SheetParser
 
         bool fatal = ScanTokens(source, all, idx, diagnostics);
         StatementSyntax? statement = null;
-        if (!fatal)
+        if (!fatal && first.Kind == TokenKind.Identifier && idx.Count > 1 && all[idx[1]].Kind == TokenKind.Equals)
+        {
+            statement = ParseDefinition(source, all, idx, diagnostics);
+        }
+        else if (!fatal)
         {
             var second = idx.Count > 1 ? all[idx[1]].Kind : TokenKind.None;
             var parser = StatementGrammar.For(first.Kind, second);
@@ -109,6 +114,52 @@ internal static class SheetParser
         }
         statement ??= Recover(source, all, idx, span);
         return group.CommentIndex >= 0 ? WithDescription(statement, source, all[group.CommentIndex]) : statement;
+    }
+
+    /// <summary>
+    /// The common statement, <c>name = expression [clauses]</c>, parsed directly (the hot path);
+    /// clauses, when present, go through the statement grammar.
+    /// </summary>
+    private static StatementSyntax? ParseDefinition(SourceText source, SyntaxToken[] all, List<int> idx, List<Diagnostic> diagnostics)
+    {
+        var tokens = new SyntaxToken[idx.Count];
+        for (int k = 0; k < tokens.Length; k++) tokens[k] = all[idx[k]];
+        var name = tokens[0];
+        var result = ExpressionParser.Parse(tokens, source.Text, 2);
+        if (result.Expression is null)
+        {
+            diagnostics.Add(ExpressionError(source, tokens, result.ErrorIndex, result.Expected));
+            return null;
+        }
+        var clauses = ClausesSyntax.Empty;
+        if (result.Next < tokens.Length)
+        {
+            var rest = StatementGrammar.Clauses.AtEnd()(ToTokenList(source, all, idx.GetRange(result.Next, idx.Count - result.Next)));
+            if (!rest.HasValue)
+            {
+                var at = rest.Location.IsAtEnd ? tokens.Length : result.Next + idx.GetRange(result.Next, idx.Count - result.Next).FindIndex(i => all[i].Start == rest.Location.First().Span.Position.Absolute);
+                diagnostics.Add(ExpressionError(source, tokens, at, "an operator, 'as', a clause (assumed, source, accepted) or the end of the line"));
+                return null;
+            }
+            clauses = rest.Value;
+        }
+        var span = TextSpan.FromBounds(name.Start, tokens[^1].End);
+        return new DefinitionSyntax(span, source.Text.Substring(name.Start, name.Length), name.Span, result.Expression) { Clauses = clauses };
+    }
+
+    private static Diagnostic ExpressionError(SourceText source, SyntaxToken[] tokens, int index, string expected)
+    {
+        if (index >= tokens.Length)
+        {
+            return Diagnostic.Error(DiagnosticCodes.IncompleteStatement, new TextSpan(tokens[^1].End, 0), DiagnosticMessages.Incomplete("expected " + expected));
+        }
+        var token = tokens[index];
+        if (token.Kind == TokenKind.Identifier && index > 0 && tokens[index - 1].Kind is TokenKind.Identifier or TokenKind.RParen
+            && Units.UnitCatalog.Default.IsSymbol(source.Slice(token.Span)))
+        {
+            return Diagnostic.Error(DiagnosticCodes.UnitWithoutNumber, token.Span, DiagnosticMessages.UnitWithoutNumber);
+        }
+        return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.Unexpected(Describe(token.Kind, source.Slice(token.Span)), expected));
     }
 
     private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment)
@@ -221,13 +272,15 @@ internal static class SheetParser
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.Unexpected(Describe(token), expected));
     }
 
-    private static string Describe(Token<TokenKind> token) => token.Kind switch
+    private static string Describe(Token<TokenKind> token) => Describe(token.Kind, token.ToStringValue());
+
+    private static string Describe(TokenKind kind, string text) => kind switch
     {
-        TokenKind.Identifier => $"name '{token.ToStringValue()}'",
-        TokenKind.Number => $"number {token.ToStringValue()}",
-        TokenKind.Unit => $"unit '{token.ToStringValue()}'",
+        TokenKind.Identifier => $"name '{text}'",
+        TokenKind.Number => $"number {text}",
+        TokenKind.Unit => $"unit '{text}'",
         TokenKind.String => "text in quotes",
-        _ => $"'{token.ToStringValue()}'",
+        _ => $"'{text}'",
     };
 
     private static StatementSyntax Recover(SourceText source, SyntaxToken[] all, List<int> idx, TextSpan span)

@@ -47,7 +47,7 @@ internal static class StatementGrammar
         from key in Token.EqualTo(TokenKind.Identifier)
         from colon in Token.EqualTo(TokenKind.Colon)
         from cells in Cell.AtLeastOnceDelimitedBy(Token.EqualTo(TokenKind.Comma))
-        from source in Token.EqualTo(TokenKind.Source).IgnoreThen(ExpressionGrammar.Text).OptionalOrDefault()
+        from source in Token.EqualTo(TokenKind.Source).IgnoreThen(ExpressionGrammar.Text).Select(t => (TextValueSyntax?)t).OptionalOrDefault()
         select new TableRowSyntax(Of(row).Cover(source?.Span ?? cells[^1].Span), key.ToStringValue(), Of(key), cells, source);
 
     private static readonly TokenListParser<TokenKind, (string Keyword, TextSpan Span, object? Node)> Clause =
@@ -55,14 +55,15 @@ internal static class StatementGrammar
             .Or(from t in Token.EqualTo(TokenKind.Source) from s in ExpressionGrammar.Text select ("source", Of(t), (object?)s))
             .Or(from t in Token.EqualTo(TokenKind.Accepted) from s in ExpressionGrammar.Text select ("accepted", Of(t), (object?)s))
             .Or(from t in Token.EqualTo(TokenKind.Where) from b in Binding select ("where", Of(t), (object?)b))
-            .Or(from t in Token.EqualTo(TokenKind.Valid) from c in Expr from m in ExpressionGrammar.Text.OptionalOrDefault()
+            .Or(from t in Token.EqualTo(TokenKind.Valid) from c in Expr from m in ExpressionGrammar.OptionalText
                 select ("valid", Of(t), (object?)new ConditionClauseSyntax(Of(t).Cover(m?.Span ?? c.Span), c, m)))
-            .Or(from t in Token.EqualTo(TokenKind.Require) from c in Expr from m in ExpressionGrammar.Text.OptionalOrDefault()
+            .Or(from t in Token.EqualTo(TokenKind.Require) from c in Expr from m in ExpressionGrammar.OptionalText
                 select ("require", Of(t), (object?)new ConditionClauseSyntax(Of(t).Cover(m?.Span ?? c.Span), c, m)))
             .Or(CautionBody.Select(c => ("caution", c.Span, (object?)c)))
             .Or(Row.Select(r => ("row", TextSpan.FromBounds(r.Span.Start, r.Span.Start + 3), (object?)r)));
 
-    private static readonly TokenListParser<TokenKind, ClausesSyntax> Clauses =
+    /// <summary>Zero or more clauses, to the end of the statement.</summary>
+    public static readonly TokenListParser<TokenKind, ClausesSyntax> Clauses =
         Clause.Many().Select(BuildClauses);
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> Definition =
@@ -74,7 +75,7 @@ internal static class StatementGrammar
         from name in Token.EqualTo(TokenKind.Identifier)
         from colon in Token.EqualTo(TokenKind.Colon)
         from kind in Token.EqualTo(TokenKind.Identifier)
-        from def in Token.EqualTo(TokenKind.Equals).IgnoreThen(Expr).OptionalOrDefault()
+        from def in ExpressionGrammar.After(TokenKind.Equals)
         select new ParameterSyntax(Of(name).Cover(def?.Span ?? Of(kind)), name.ToStringValue(), Of(name), kind.ToStringValue(), Of(kind), def);
 
     /// <summary>The part of a function before its formula; used alone to recover when the formula does not parse.</summary>
@@ -98,7 +99,7 @@ internal static class StatementGrammar
     private static readonly TokenListParser<TokenKind, StatementSyntax> Check =
         from check in Token.EqualTo(TokenKind.Check)
         from condition in Expr
-        from tolerance in Token.EqualTo(TokenKind.Within).IgnoreThen(Expr).OptionalOrDefault()
+        from tolerance in ExpressionGrammar.After(TokenKind.Within)
         from clauses in Clauses
         select (StatementSyntax)new CheckSyntax(Of(check).Cover(tolerance?.Span ?? condition.Span), condition, tolerance) { Clauses = clauses };
 

@@ -1,0 +1,20 @@
+using System.Text;
+
+namespace CutSheet.Cli;
+
+/// <summary>The process entry point: binds <see cref="CliApp"/> to the real console.</summary>
+internal static class Program
+{
+    private static int Main(string[] args)
+    {
+        // Units such as "N·m" and "µm" must reach the terminal intact whatever the platform's code page.
+        Console.OutputEncoding = new UTF8Encoding(encoderShouldEmitUTF8Identifier: false);
+        var host = new CliHost(
+            Console.Out,
+            Console.Error,
+            Environment.GetEnvironmentVariable,
+            Environment.CurrentDirectory,
+            OutputIsTerminal: !Console.IsOutputRedirected);
+        return CliApp.Run(args, host);
+    }
+}
