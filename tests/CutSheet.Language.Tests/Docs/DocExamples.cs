@@ -51,6 +51,13 @@ public static class DocExamples
                     i++;
                     continue;
                 }
+                if (lines[i].Trim() == "```text")
+                {
+                    // Every result block belongs to the sheet just before it; one that does not is stale.
+                    mismatches.Add(new Mismatch(i + 1, "", "(no result block here: it follows no sheet)", lines[i]));
+                    i++;
+                    continue;
+                }
                 if (lines[i].Trim() != "```cutsheet") { i++; continue; }
                 int sheetStart = i + 1;
                 int sheetEnd = FenceEnd(lines, sheetStart);
