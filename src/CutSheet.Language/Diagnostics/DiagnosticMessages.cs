@@ -56,14 +56,17 @@ public static class DiagnosticMessages
     public const string AngleInserted = "a plain frequency shown as an angular velocity: 1 s⁻¹ is read as 1 rad/s; if it counts revolutions or cycles, write ω = 2 * pi * n";
     public static string CountMix(string leftUnit, string rightUnit) =>
         $"{leftUnit} and {rightUnit} count different things (e.g. a lead per revolution and a plain length); check that this is meant";
-    public static string KindMismatch(string op, string leftKind, string rightKind) => $"cannot {op} a {leftKind} and a {rightKind}";
+    public static string KindMismatch(string op, string leftKind, string rightKind) =>
+        $"cannot {op} {leftKind.Replace('_', ' ')} and {rightKind.Replace('_', ' ')}: they are different kinds of quantity (ISO 80000)";
+    public static string UnknownChoice(string name, string? suggestion) =>
+        suggestion is null ? $"'{name}' is not a choice" : $"'{name}' is not a choice; did you mean '{suggestion}'?";
 
     public static string ArgumentDimension(string function, string parameter, Kind expected, string gotUnit, Dimension got) =>
         $"{function}: '{parameter}' expects {expected.Description} ({expected.Dimension.ToSiString()}), got {gotUnit} ({Kinds.Describe(got)}, {got.ToSiString()})";
     public static string ArgumentRotation(string function, string parameter, Kind expected, string gotUnit) =>
         $"{function}: '{parameter}' expects {expected.Description}, got {gotUnit}, which differs by 2π; convert with 'as'";
-    public static string ArgumentCount(string function, string parameter, Kind expected, string gotUnit, Dimension got) =>
-        $"{function}: '{parameter}' expects {expected.Description}, got {gotUnit} ({Kinds.Describe(got)}); a lead is not a pitch — convert with 'as' if this is meant";
+    public static string ArgumentCount(string function, string parameter, Kind expected, string gotUnit, string what) =>
+        $"{function}: '{parameter}' expects {expected.Description}, got {gotUnit}: {what}; convert with 'as' if this is meant";
     public static string ArgumentKind(string function, string parameter, Kind expected, Kind got) =>
         $"{function}: '{parameter}' expects {expected.Description}, got {got.Description}";
     public static string ReturnKind(string function, Kind declared, string gotUnit, Dimension got) =>
@@ -81,6 +84,7 @@ public static class DiagnosticMessages
         $"'{name}' is used on line {useLine} before its definition on line {defLine}; a sheet reads top to bottom";
     public static string MoveLineFix(string name, int toLine) => $"move the definition of '{name}' before line {toLine}";
     public static string Redefinition(string name, int firstLine) => $"'{name}' is already defined on line {firstLine}; a name is defined once";
+    public static string RedefinitionOfBuiltin(string name) => $"'{name}' is built into the language and cannot be defined again";
     public static string ImportedRedefinition(string name, string from) =>
         $"'{name}' is imported from {from}; to change an imported input, write it in the import: use {from} with ({name} = …)";
     public static string UnknownFunction(string name, string? suggestion) =>
@@ -118,6 +122,7 @@ public static class DiagnosticMessages
     public const string DivisionByZero = "division by zero";
     public static string DomainError(string function, string detail) => $"{function}: {detail}";
     public const string NotFinite = "the result is not a finite number";
+    public static string NumberNotFinite(string written) => $"'{written}' is not a finite number (too large, or a fraction over zero)";
     public static string RequirementFailed(string function, string condition, string? why) =>
         $"{function} requires {condition}{(why is null ? "" : ": " + why)}";
     public static string ListMismatch(int left, int right) => $"lists of different lengths ({left} and {right}) cannot be combined";

@@ -35,10 +35,20 @@ internal sealed partial class ExpressionEvaluator
 
         var values = new Value[operands.Count];
         bool unknown = false;
-        for (int i = 0; i < operands.Count; i++)
+        bool chainHasPi = operands.Exists(o => IsPi(o.Syntax));
+        // A π in this product covers the products nested in it: 2 * pi * (n * T) carries its 2π.
+        if (chainHasPi) _piProducts++;
+        try
         {
-            values[i] = Evaluate(operands[i].Syntax, f);
-            if (values[i].IsUnknown) unknown = true;
+            for (int i = 0; i < operands.Count; i++)
+            {
+                values[i] = Evaluate(operands[i].Syntax, f);
+                if (values[i].IsUnknown) unknown = true;
+            }
+        }
+        finally
+        {
+            if (chainHasPi) _piProducts--;
         }
         if (unknown) return Value.Unknown;
 
@@ -48,7 +58,7 @@ internal sealed partial class ExpressionEvaluator
             acc = Multiply(root, acc, operands[i - 1].Syntax, values[i], operands[i].Syntax, operands[i].Divide, f);
             if (acc.IsUnknown) return acc;
         }
-        if (!f.CheckOnly) RotationTraps(root, operands, values, acc, f);
+        if (!f.CheckOnly && !chainHasPi && _piProducts == 0) RotationTraps(root, operands, values, acc, f);
         return PiTurnsRevolutionsIntoRadians(operands, acc);
     }
 
@@ -91,6 +101,8 @@ internal sealed partial class ExpressionEvaluator
 
     private Value Multiply(BinarySyntax root, Value acc, ExpressionSyntax accSyntax, Value v, ExpressionSyntax vSyntax, bool divide, EvalFrame f)
     {
+        WarnOffsetScale(accSyntax, f);
+        WarnOffsetScale(vSyntax, f);
         if (acc.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, accSyntax.Span, "a quantity", acc);
         if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, vSyntax.Span, "a quantity", v);
         var (ad, at) = DimensionOf(acc);
@@ -143,20 +155,28 @@ internal sealed partial class ExpressionEvaluator
             if (d[Dimension.Rev] < 0) perRev = i;
             if (d[Dimension.Angle] > 0) angle = i;
         }
-        if (rotational && rd[Dimension.Rev] > 0 && (torque || length) && !f.MentionsPi)
+        if (rotational && rd[Dimension.Rev] > 0 && (torque || length))
         {
-            var insert2Pi = new Fix("multiply by 2 * pi", [new TextEdit(new TextSpan(root.Span.Start, 0), "2 * pi * ")]);
+            var at = new TextSpan(root.Span.Start, 0);
+            var twoPi = new Fix("multiply by 2 * pi", [new TextEdit(at, "2 * pi * ")]);
             if (torque)
-                Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, insert2Pi);
+            {
+                Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, [twoPi]);
+            }
             else if (rd.SiEquals(Dimension.FromSi(1, 0, -1)) && !namedNumber)
-                Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, insert2Pi);
+            {
+                // v = π·D·n for a diameter, 2π·r·n for a radius: offer both, the likelier first.
+                var pi = new Fix("multiply by pi (the length is a diameter)", [new TextEdit(at, "pi * ")]);
+                bool halved = operands.Exists(o => o.Divide && o.Syntax is QuantityLiteralSyntax { Number: 2, Unit: null });
+                Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, halved ? [twoPi, pi] : [pi, twoPi]);
+            }
         }
         if (perRev >= 0 && angle >= 0)
         {
             var s = operands[angle].Syntax;
             string text = f.Foreign ? "" : _source.Slice(s.Span);
             var fix = new Fix("convert the angle to revolutions", [new TextEdit(s.Span, $"({text} as rev)")]);
-            Warn(f, DiagnosticCodes.PerRevTimesAngle, root.Span, DiagnosticMessages.PerRevTimesAngle, fix);
+            Warn(f, DiagnosticCodes.PerRevTimesAngle, root.Span, DiagnosticMessages.PerRevTimesAngle, [fix]);
         }
     }
 

@@ -80,9 +80,13 @@ internal sealed partial class SheetEvaluator
             int errors = result.Diagnostics.Count(d => d.Severity == Severity.Error);
             if (errors > 0)
             {
+                // Point at the cause: through imports of imports, down to the first real error.
                 var first = result.Diagnostics.First(d => d.Severity == Severity.Error);
-                _sink.Report(new Diagnostic(DiagnosticCodes.ImportHasErrors, Severity.Error, use.TargetSpan, DiagnosticMessages.ImportHasErrors(label, errors),
-                    [new RelatedLocation(first.Span, first.Message, first.Path ?? path)], []));
+                var cause = first.Code == DiagnosticCodes.ImportHasErrors && first.Related.Count > 0
+                    ? first.Related[0]
+                    : new RelatedLocation(first.Span, first.Message, first.Path ?? path);
+                _sink.Report(new Diagnostic(DiagnosticCodes.ImportHasErrors, Severity.Error, use.TargetSpan,
+                    DiagnosticMessages.ImportHasErrors(label, errors) + "; first: " + cause.Message, [cause], []));
             }
             foreach (var o in use.Overrides)
             {

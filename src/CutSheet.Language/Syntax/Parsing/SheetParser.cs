@@ -17,7 +17,8 @@ namespace CutSheet.Language.Syntax.Parsing;
 internal static class SheetParser
 {
     private const int MaxDepth = 64;
-    private const int MaxTokensPerStatement = 4000;
+    /// <summary>Enough for a list of 10,000 values; long chains are parsed and evaluated without deep recursion.</summary>
+    private const int MaxTokensPerStatement = 25_000;
 
     public static SheetSyntax Parse(SourceText source)
     {
@@ -186,7 +187,7 @@ internal static class SheetParser
     {
         if (tokens.Length > MaxTokensPerStatement)
         {
-            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NestingTooDeep, tokens[0].Span, DiagnosticMessages.LimitExceeded($"a statement has more than {MaxTokensPerStatement} tokens")));
+            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.LimitExceeded, tokens[0].Span, DiagnosticMessages.LimitExceeded($"a statement has more than {MaxTokensPerStatement} tokens")));
             return true;
         }
         bool fatal = false;
@@ -213,6 +214,10 @@ internal static class SheetParser
                     else if (mark is '\'' or '′')
                         diagnostics.Add(Diagnostic.Error(DiagnosticCodes.FootMark, t.Span, DiagnosticMessages.FootMark,
                             new Fix("write ft", [new TextEdit(t.Span, " ft")])));
+                    break;
+                case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) == 0 && !double.IsFinite(NumberText.Parse(source.Slice(t.Span))):
+                    diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NotFinite, t.Span, DiagnosticMessages.NumberNotFinite(source.Slice(t.Span))));
+                    fatal = true;
                     break;
                 case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) != 0:
                     string written = source.Slice(t.Span);
