@@ -69,6 +69,8 @@ public static class DiagnosticMessages
         $"{function}: '{parameter}' expects {expected.Description}, got {gotUnit}: {what}; convert with 'as' if this is meant";
     public static string ArgumentKind(string function, string parameter, Kind expected, Kind got) =>
         $"{function}: '{parameter}' expects {expected.Description}, got {got.Description}";
+    public static string DeclaredKindMismatch(string function, string parameter, Kind expected, Kind got) =>
+        $"{function}: '{parameter}' expects {expected.Description}, got {got.Description}; the two are not interchangeable — check which one the formula needs";
     public static string ReturnKind(string function, Kind declared, string gotUnit, Dimension got) =>
         $"{function} declares {declared.Description} ({declared.Dimension.ToSiString()}) but its formula gives {gotUnit} ({Kinds.Describe(got)}, {got.ToSiString()})";
     public const string TorqueTimesRpm = "torque × rotational frequency without 2π: power is P = 2π·n·T (n in rev/min), or T·ω with ω in rad/s";
@@ -125,6 +127,7 @@ public static class DiagnosticMessages
     public static string NumberNotFinite(string written) => $"'{written}' is not a finite number (too large, or a fraction over zero)";
     public static string RequirementFailed(string function, string condition, string? why) =>
         $"{function} requires {condition}{(why is null ? "" : ": " + why)}";
+    public static string InterpolationPoints(int xs, int ys) => $"interpolate needs two lists of at least two points and equal length, got {xs} and {ys}";
     public static string ListMismatch(int left, int right) => $"lists of different lengths ({left} and {right}) cannot be combined";
     public static string LimitExceeded(string what) => $"evaluation limit reached: {what}";
     public static string TypeMismatch(string expected, string got) => $"expected {expected}, got {got}";

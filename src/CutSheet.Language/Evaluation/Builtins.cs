@@ -43,6 +43,7 @@ internal static class Builtins
         ("rms", "rms(list)", "root mean square of a list"),
         ("count", "count(list)", "number of values in a list"),
         ("power_mean", "power_mean(list, p)", "(Σ xᵢᵖ / n)^(1/p), e.g. the cubic mean of a load spectrum"),
+        ("interpolate", "interpolate(x, xs, ys)", "y at x by straight lines between the points (xs ascending), e.g. a motor's torque–speed curve; outside the points is an error"),
     ];
 
     public static IEnumerable<string> FunctionNames => Functions.Select(f => f.Name);
@@ -59,6 +60,7 @@ internal static class Builtins
         int expected = name switch
         {
             "atan2" or "round" or "power_mean" => 2,
+            "interpolate" => 3,
             "min" or "max" => -1,
             _ => 1,
         };
@@ -190,6 +192,7 @@ internal static class Builtins
                 return Value.Of(new Quantity(r, list.Dimension, list.Tag));
             }
         }
+        if (name == "interpolate") return Interpolate(args, call, ref problem);
         problem = Fail(DiagnosticCodes.UnknownFunction, span, DiagnosticMessages.UnknownFunction(name, null));
         return Value.Unknown;
     }
@@ -204,6 +207,43 @@ internal static class Builtins
             return (double)d * step;
         }
         return x;
+    }
+
+    /// <summary>Linear interpolation in a table of points; the points must be ascending and x within them.</summary>
+    private static Value Interpolate(Value[] args, CallSyntax call, ref (string, TextSpan, string)? problem)
+    {
+        TextSpan At(int i) => call.Arguments[i].Value.Span;
+        if (!Scalar(args, 0, At(0), out var x, ref problem)) return Value.Unknown;
+        if (!ListArg(args, 1, At(1), "interpolate", out var xs, ref problem) || !ListArg(args, 2, At(2), "interpolate", out var ys, ref problem)) return Value.Unknown;
+        if (xs.Values.Length != ys.Values.Length || xs.Values.Length < 2)
+        {
+            problem = (DiagnosticCodes.ListMismatch, call.Span, DiagnosticMessages.InterpolationPoints(xs.Values.Length, ys.Values.Length));
+            return Value.Unknown;
+        }
+        if (!x.Dimension.SiEquals(xs.Dimension))
+        {
+            problem = (DiagnosticCodes.DimensionMismatch, At(0), DiagnosticMessages.DimensionMismatch("look up", Describe(x), x.Dimension, "points in " + Describe(new Quantity(xs.Values[0], xs.Dimension)), xs.Dimension));
+            return Value.Unknown;
+        }
+        var p = xs.Values;
+        for (int i = 1; i < p.Length; i++)
+        {
+            if (!(p[i] > p[i - 1]))
+            {
+                problem = (DiagnosticCodes.DomainError, At(1), DiagnosticMessages.DomainError("interpolate", "the points must be in ascending order"));
+                return Value.Unknown;
+            }
+        }
+        if (x.Si < p[0] || x.Si > p[^1])
+        {
+            problem = (DiagnosticCodes.DomainError, At(0), DiagnosticMessages.DomainError("interpolate", "the value lies outside the table; a curve is not extrapolated"));
+            return Value.Unknown;
+        }
+        int k = 1;
+        while (k < p.Length - 1 && x.Si > p[k]) k++;
+        double t = (x.Si - p[k - 1]) / (p[k] - p[k - 1]);
+        double y = ys.Values[k - 1] + t * (ys.Values[k] - ys.Values[k - 1]);
+        return Value.Of(new Quantity(y, ys.Dimension, ys.Tag));
     }
 
     private static Value Extreme(string name, Value[] args, CallSyntax call, ref (string, TextSpan, string)? problem)

@@ -276,7 +276,12 @@ internal sealed partial class ExpressionEvaluator
         }
         if (kind.IsTagged && q.Tag is not null && q.Tag != kind)
         {
-            return Error(f, DiagnosticCodes.ArgumentKind, syntax.Span, DiagnosticMessages.ArgumentKind(name, p.Name, kind, q.Tag));
+            // Declared kinds of one dimension (a drive efficiency for a back-drive one) are a caution:
+            // the number may be close, but it answers another question.
+            if (kind.Basis is null && q.Tag.Basis is null)
+                return Error(f, DiagnosticCodes.ArgumentKind, syntax.Span, DiagnosticMessages.ArgumentKind(name, p.Name, kind, q.Tag));
+            if (!f.CheckOnly && !f.Foreign)
+                Fire(CautionLevel.Caution, DiagnosticMessages.DeclaredKindMismatch(name, p.Name, kind, q.Tag), syntax.Span, null, DiagnosticCodes.ArgumentKind);
         }
         return Value.Of(new Quantity(q.Si * factor, k, kind.IsTagged ? kind : null));
     }

@@ -44,6 +44,17 @@ internal sealed partial class SheetEvaluator
                     if (CanDeclare(t.Name, t.NameSpan))
                         _scope.Tables[t.Name] = new TableSymbol(t, null, _source.Path);
                     break;
+                case KindDeclarationSyntax k:
+                    var basis = Kinds.Find(k.Base);
+                    if (basis is null || basis.Basis is not null)
+                    {
+                        var candidates = Kinds.Builtin.Select(b => b.Name).Concat(Kinds.Aliases.Keys);
+                        _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, k.BaseSpan, DiagnosticMessages.UnknownKind(k.Base, ExpressionEvaluator.Suggest(k.Base, candidates))));
+                        break;
+                    }
+                    if (CanDeclare(k.Name, k.NameSpan))
+                        _scope.Kinds[k.Name] = new Kind(k.Name, basis.Dimension, k.Clauses.Description?.Value ?? $"{k.Name.Replace('_', ' ')} (a {basis.Name.Replace('_', ' ')})", isTagged: true, basis: basis);
+                    break;
             }
         }
     }
@@ -111,11 +122,12 @@ internal sealed partial class SheetEvaluator
     {
         if (name == "list") return (null, null, true, false);
         if (name == "boolean") return (null, null, false, true);
-        var kind = Kinds.Find(name);
+        var kind = Kinds.Find(name) ?? _scope.Kinds.GetValueOrDefault(name)
+            ?? (_scope.Imported.TryGetValue(name, out var importedKind) ? importedKind.Symbol as Kind : null);
         if (kind is not null) return (kind, null, false, false);
         if (_scope.Choices.TryGetValue(name, out var choice)) return (null, choice, false, false);
         if (_scope.Imported.TryGetValue(name, out var imported) && imported.Symbol is ChoiceType ic) return (null, ic, false, false);
-        var candidates = Kinds.Builtin.Select(k => k.Name).Concat(Kinds.Aliases.Keys).Concat(_scope.Choices.Keys).Append("list").Append("boolean");
+        var candidates = Kinds.Builtin.Select(k => k.Name).Concat(Kinds.Aliases.Keys).Concat(_scope.Choices.Keys).Concat(_scope.Kinds.Keys).Append("list").Append("boolean");
         _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, span, DiagnosticMessages.UnknownKind(name, ExpressionEvaluator.Suggest(name, candidates))));
         return (null, null, false, false);
     }

@@ -71,6 +71,7 @@ internal sealed partial class SheetEvaluator
             CautionSyntax => ["source", "accepted"],
             TableSyntax => ["source", "row"],
             ChoiceSyntax => ["source"],
+            KindDeclarationSyntax => ["source"],
             _ => [],
         };
         foreach (var (keyword, span) in statement.Clauses.Keywords)

@@ -156,6 +156,14 @@ internal static class StatementGrammar
         from clauses in Clauses
         select (StatementSyntax)new TableSyntax(Between(table, close), name.ToStringValue(), Of(name), key.ToStringValue(), Of(key)) { Clauses = clauses };
 
+    private static readonly TokenListParser<TokenKind, StatementSyntax> KindDeclaration =
+        from keyword in Token.EqualTo(TokenKind.KindKeyword)
+        from name in Token.EqualTo(TokenKind.Identifier)
+        from eq in Token.EqualTo(TokenKind.Equals)
+        from basis in Token.EqualTo(TokenKind.Identifier)
+        from clauses in Clauses
+        select (StatementSyntax)new KindDeclarationSyntax(Between(keyword, basis), name.ToStringValue(), Of(name), basis.ToStringValue(), Of(basis)) { Clauses = clauses };
+
     /// <summary>The parser for a statement that starts with the given tokens, or null when no statement starts so.</summary>
     public static TokenListParser<TokenKind, StatementSyntax>? For(TokenKind first, TokenKind second) => first switch
     {
@@ -168,6 +176,7 @@ internal static class StatementGrammar
         TokenKind.Display => Display.AtEnd(),
         TokenKind.Choice => Choice.AtEnd(),
         TokenKind.Table => Table.AtEnd(),
+        TokenKind.KindKeyword => KindDeclaration.AtEnd(),
         _ => null,
     };
 
