@@ -64,7 +64,7 @@ internal sealed partial class SheetEvaluator
         var diagnostics = _syntax.Diagnostics.Concat(_sink.Diagnostics)
             .OrderBy(d => d.Path is null ? 0 : 1).ThenBy(d => d.Span.Start).ThenBy(d => d.Code, StringComparer.Ordinal)
             .ToArray();
-        return new SheetResult(_syntax, statements, diagnostics, _metadata, _display, _importNames);
+        return new SheetResult(_syntax, statements, diagnostics, _metadata, _display, _importNames, _scope);
     }
 
     private int LineOf(TextSpan span) => _source.GetPosition(span.Start).Line;
