@@ -26,9 +26,10 @@ internal static class SheetParser
         var diagnostics = new List<Diagnostic>();
         var statements = new List<StatementSyntax>();
         var significant = new SyntaxToken[tokens.Length];
+        var pool = new StringPool();
         foreach (var group in Group(tokens, significant))
         {
-            var statement = ParseStatement(source, significant.AsSpan(group.Start, group.Count), group.Comment, diagnostics);
+            var statement = ParseStatement(source, significant.AsSpan(group.Start, group.Count), group.Comment, diagnostics, pool);
             if (statement is not null) statements.Add(statement);
         }
         return new SheetSyntax(source, tokens, statements, diagnostics);
@@ -81,7 +82,7 @@ internal static class SheetParser
         return groups;
     }
 
-    private static StatementSyntax? ParseStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, SyntaxToken? comment, List<Diagnostic> diagnostics)
+    private static StatementSyntax? ParseStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, SyntaxToken? comment, List<Diagnostic> diagnostics, StringPool pool)
     {
         var first = tokens[0];
         var span = TextSpan.FromBounds(first.Start, tokens[^1].End);
@@ -99,7 +100,7 @@ internal static class SheetParser
         StatementSyntax? statement = null;
         if (!fatal && first.Kind == TokenKind.Identifier && tokens.Length > 1 && tokens[1].Kind == TokenKind.Equals)
         {
-            statement = ParseDefinition(source, tokens, diagnostics);
+            statement = ParseDefinition(source, tokens, diagnostics, pool);
         }
         else if (!fatal)
         {
@@ -128,10 +129,10 @@ internal static class SheetParser
     /// The common statement, <c>name = expression [clauses]</c>, parsed directly (the hot path);
     /// clauses, when present, go through the statement grammar.
     /// </summary>
-    private static StatementSyntax? ParseDefinition(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics)
+    private static StatementSyntax? ParseDefinition(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics, StringPool pool)
     {
         var name = tokens[0];
-        var result = ExpressionParser.Parse(tokens, source.Text, 2);
+        var result = ExpressionParser.Parse(tokens, source.Text, 2, pool);
         if (result.Expression is null)
         {
             diagnostics.Add(ExpressionError(source, tokens, result.ErrorIndex, result.Expected));
@@ -151,7 +152,7 @@ internal static class SheetParser
             clauses = parsed.Value;
         }
         var span = TextSpan.FromBounds(name.Start, tokens[^1].End);
-        return new DefinitionSyntax(span, source.Text.Substring(name.Start, name.Length), name.Span, result.Expression) { Clauses = clauses };
+        return new DefinitionSyntax(span, pool.Get(source.Text, name.Start, name.Length), name.Span, result.Expression) { Clauses = clauses };
     }
 
     private static int IndexAt(ReadOnlySpan<SyntaxToken> tokens, int start)
