@@ -38,6 +38,8 @@ internal static class Builtins
         ("ln", "ln(ratio)", "natural logarithm of a positive plain number"),
         ("log10", "log10(ratio)", "decimal logarithm of a positive plain number"),
         ("round", "round(x, step)", "x rounded to a multiple of step (half away from zero)"),
+        ("floor", "floor(x, step)", "the largest multiple of step not above x"),
+        ("ceil", "ceil(x, step)", "the smallest multiple of step not below x"),
         ("sum", "sum(list)", "sum of a list"),
         ("mean", "mean(list)", "arithmetic mean of a list"),
         ("rms", "rms(list)", "root mean square of a list"),
@@ -59,7 +61,7 @@ internal static class Builtins
 
         int expected = name switch
         {
-            "atan2" or "round" or "power_mean" => 2,
+            "atan2" or "round" or "floor" or "ceil" or "power_mean" => 2,
             "interpolate" => 3,
             "min" or "max" => -1,
             _ => 1,
@@ -147,7 +149,7 @@ internal static class Builtins
                 }
                 return Value.Of(new Quantity(name == "exp" ? Math.Exp(x) : name == "ln" ? Math.Log(x) : Math.Log10(x), Dimension.None));
             }
-            case "round":
+            case "round" or "floor" or "ceil":
             {
                 if (!Scalar(args, 0, ArgSpan(0), out var x, ref problem) || !Scalar(args, 1, ArgSpan(1), out var step, ref problem)) return Value.Unknown;
                 if (!x.Dimension.SiEquals(step.Dimension))
@@ -160,7 +162,10 @@ internal static class Builtins
                     problem = Fail(DiagnosticCodes.DomainError, ArgSpan(1), DiagnosticMessages.DomainError(name, "the step must be positive"));
                     return Value.Unknown;
                 }
-                return Value.Of(x with { Si = RoundToStep(x.Si, step.Si) });
+                double steps = x.Si / step.Si;
+                double result = name == "round" ? RoundToStep(x.Si, step.Si)
+                    : (name == "floor" ? Math.Floor(steps + 1e-12) : Math.Ceiling(steps - 1e-12)) * step.Si;
+                return Value.Of(x with { Si = result });
             }
             case "sum" or "mean" or "rms" or "count":
             {

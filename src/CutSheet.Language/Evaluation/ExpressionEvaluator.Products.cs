@@ -73,7 +73,8 @@ internal sealed partial class ExpressionEvaluator
         int up = 0, down = 0;
         foreach (var (divide, syntax) in operands)
         {
-            if (syntax is NameSyntax { Qualifier: null, Name: "pi" or "π" }) { if (divide) down++; else up++; }
+            var (n, d) = PiFactors(syntax);
+            if (divide) { up += d; down += n; } else { up += n; down += d; }
         }
         if (up == 0 && down == 0) return acc;
         var (dim, tag) = DimensionOf(acc);
@@ -123,6 +124,30 @@ internal sealed partial class ExpressionEvaluator
         return Elementwise(f, root.Span, acc, v, divide ? static (x, y) => x / y : static (x, y) => x * y, dim, tag);
     }
 
+    /// <summary>The π factors of a product written in brackets, (2 * pi * eta): in its numerator and its denominator.</summary>
+    private static (int Up, int Down) PiFactors(ExpressionSyntax e)
+    {
+        switch (e)
+        {
+            case NameSyntax { Qualifier: null, Name: "pi" or "π" }:
+                return (1, 0);
+            case BinarySyntax { Operator: BinaryOperator.Multiply } m:
+            {
+                var (a, b) = PiFactors(m.Left);
+                var (c, d) = PiFactors(m.Right);
+                return (a + c, b + d);
+            }
+            case BinarySyntax { Operator: BinaryOperator.Divide } q:
+            {
+                var (a, b) = PiFactors(q.Left);
+                var (c, d) = PiFactors(q.Right);
+                return (a + d, b + c);
+            }
+            default:
+                return (0, 0);
+        }
+    }
+
     private static bool IsPi(ExpressionSyntax e) => e is NameSyntax { Qualifier: null, Name: "pi" or "π" };
 
     private static bool HasRotation(Value v)
@@ -150,8 +175,9 @@ internal sealed partial class ExpressionEvaluator
             if (operands[i].Divide) continue;
             if (d.SiEquals(torqueDim) && tag != Kinds.Energy) torque = true;
             if (d[Dimension.Rev] > 0 && d[Dimension.Time] < 0) rotational = true;
-            if (d.SiEquals(Dimension.FromSi(1, 0, 0)) && d[Dimension.Rev] == 0) length = true;
-            if (d.IsNone && operands[i].Syntax is NameSyntax) namedNumber = true;
+            if (d == Dimension.FromSi(1, 0, 0)) length = true;
+            // A count of teeth or starts (or a plain number with a name) makes this a feed, f_z · z · n, not a surface speed.
+            if (d.IsDimensionless && d[Dimension.Rev] == 0 && d[Dimension.Angle] == 0 && (d.HasSoft || operands[i].Syntax is NameSyntax)) namedNumber = true;
             if (d[Dimension.Rev] < 0) perRev = i;
             if (d[Dimension.Angle] > 0) angle = i;
         }

@@ -83,7 +83,7 @@ internal sealed partial class ExpressionEvaluator
         if (key.Kind != ValueKind.Choice || (table.Key is not null && key.Choice!.Type != table.Key))
             return TypeError(f, l.Key.Span, $"an option of {table.Key?.Name ?? "the table's choice"}", key);
         if (!table.Rows.TryGetValue(key.Choice!.Name, out var row) || !row.Cells.TryGetValue(l.Column, out var cell))
-            return Error(f, DiagnosticCodes.MissingRow, l.Span, DiagnosticMessages.MissingRow(table.Name, key.Choice!.Name + "." + l.Column));
+            return f.CheckOnly ? Value.Unknown : Error(f, DiagnosticCodes.MissingRow, l.Span, DiagnosticMessages.MissingRow(table.Name, key.Choice!.Name + "." + l.Column));
         return cell.Typical;
     }
 }

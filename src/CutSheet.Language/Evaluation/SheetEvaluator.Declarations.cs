@@ -114,7 +114,10 @@ internal sealed partial class SheetEvaluator
                 _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, t.KeyChoiceSpan, DiagnosticMessages.UnknownChoice(t.KeyChoice,
                     ExpressionEvaluator.Suggest(t.KeyChoice, _scope.Choices.Keys))));
             }
-            _scope.Tables[t.Name] = new TableSymbol(t, key, _source.Path);
+            var declared = new TableSymbol(t, key, _source.Path);
+            // Columns are known from the text, so a function can look a table up before its rows are evaluated.
+            foreach (var row in t.Clauses.Rows) foreach (var cell in row.Cells) declared.Columns.Add(cell.Column);
+            _scope.Tables[t.Name] = declared;
         }
     }
 
