@@ -18,6 +18,7 @@ public static class DiagnosticMessages
         ? $"'{written}' uses a comma as decimal mark or thousands separator; write a decimal point and no separators"
         : $"'{written}' uses a decimal comma; write a decimal point: {fixedText}";
     public const string UnbalancedBracket = "a bracket is not closed on this statement";
+    public const string StrayClosingBracket = "this closing bracket has no opening bracket before it";
     public static string Incomplete(string what) => $"the statement ends early: {what}";
     public const string NestingTooDeep = "the expression is nested too deeply (more than 64 levels)";
     public const string NotAStatement = "a line must define a name (name = …), a function, a check, a caution, a heading or a setting";
@@ -27,7 +28,7 @@ public static class DiagnosticMessages
     // Units
     public const string EmptyUnit = "the unit is empty";
     public static string UnexpectedInUnit(string c, string unit) => $"'{c}' cannot appear in the unit '{unit}'";
-    public static string BadUnitExponent(int n) => $"a unit exponent must be a whole number from -12 to 12 other than 0, not {n}";
+    public static string BadUnitExponent(int n) => FormattableString.Invariant($"a unit exponent must be a whole number from -12 to 12 other than 0, not {n}");
     public const string MissingUnitExponent = "a unit power needs a whole-number exponent, e.g. m^2 or s^-1";
     public const string UnitEndsEarly = "the unit ends early";
     public const string UnclosedUnitParen = "a parenthesis in the unit is not closed";

@@ -86,6 +86,12 @@ internal sealed partial class ExpressionEvaluator
         }
 
         if (f.RecordDependencies && ReferenceEquals(fn.Home, _top) && fn.ReadsSheetDefinitions) f.DependsOnSheet = true;
+        if (!fn.IsValid)
+        {
+            // Its declaration is reported; evaluate the arguments for their own diagnostics and stop.
+            foreach (var a in call.Arguments) Evaluate(a.Value, f);
+            return Value.Unknown;
+        }
         var locals = new Dictionary<string, Value>(StringComparer.Ordinal);
         bool foreign = f.Foreign || !ReferenceEquals(fn.Home, _top);
         var callSite = f.Foreign ? f.CallSite : call.Span;
@@ -222,6 +228,7 @@ internal sealed partial class ExpressionEvaluator
             if (i == Dimension.Angle)
             {
                 if (frequency) return h == 0 ? "a plain frequency where an angle per time is expected (ω = 2π·f)" : "an angle per time where a plain frequency is expected";
+                if (h == 0 && w > 0 && have.IsNone) return "a plain number where an angle is expected is read as radians; write deg or rad";
                 continue;
             }
             if (w < 0 && h == 0) return $"a plain value where a value per {name} is expected (a pitch is not a lead on a multi-start screw)";
@@ -255,7 +262,7 @@ internal sealed partial class ExpressionEvaluator
             if (v.Kind == ValueKind.Quantity) return Value.Of(new QuantityList([v.Quantity.Si], v.Quantity.Dimension, v.Quantity.Tag));
             return v.Kind == ValueKind.List ? v : TypeError(f, syntax.Span, $"a list for '{p.Name}'", v);
         }
-        var kind = p.Kind!;
+        if (p.Kind is not { } kind) return Value.Unknown;
         if (v.Kind != ValueKind.Quantity) return TypeError(f, syntax.Span, $"{kind.Description} for '{p.Name}'", v);
         var q = v.Quantity;
         var d = q.Dimension;

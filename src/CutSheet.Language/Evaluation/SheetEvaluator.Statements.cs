@@ -85,6 +85,9 @@ internal sealed partial class SheetEvaluator
                     CheckSyntax => "a check",
                     CautionSyntax => "a caution",
                     TableSyntax => "a table",
+                    ChoiceSyntax => "a choice",
+                    KindDeclarationSyntax => "a kind declaration",
+                    UseSyntax => "an import",
                     _ => "this statement",
                 };
                 _sink.Report(Diagnostic.Error(DiagnosticCodes.ClauseNotAllowed, span, DiagnosticMessages.ClauseNotAllowed(keyword, what)));

@@ -171,7 +171,8 @@ internal ref struct ExpressionParser
         {
             var s = Take();
             string text = TextOf(s);
-            int sign = text.StartsWith('⁻') ? -1 : 1, value = 0;
+            int sign = text.StartsWith('⁻') ? -1 : 1;
+            double value = 0;
             foreach (char c in text)
             {
                 int d = Units.Superscript.DigitValue(c);
@@ -200,10 +201,11 @@ internal ref struct ExpressionParser
                 return ParseNameOrCall();
             case TokenKind.LParen:
             {
-                Take();
+                var open = Take();
                 var inner = ParseExpression();
                 if (inner is null) return null;
-                return Expect(TokenKind.RParen, "')'", out _) ? inner : null;
+                // The brackets belong to the expression's span (hover and underlines cover them).
+                return Expect(TokenKind.RParen, "')'", out var close) ? inner with { Span = TextSpan.FromBounds(open.Start, close.End) } : null;
             }
             case TokenKind.LBracket:
             {

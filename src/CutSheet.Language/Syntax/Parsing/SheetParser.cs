@@ -235,7 +235,7 @@ internal static class SheetParser
                 case TokenKind.RParen or TokenKind.RBracket:
                     if (depth == 0)
                     {
-                        diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnbalancedBracket, t.Span, DiagnosticMessages.UnbalancedBracket));
+                        diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnbalancedBracket, t.Span, DiagnosticMessages.StrayClosingBracket));
                         fatal = true;
                     }
                     else depth--;

@@ -47,7 +47,8 @@ internal static class StatementGrammar
         from key in Token.EqualTo(TokenKind.Identifier)
         from colon in Token.EqualTo(TokenKind.Colon)
         from cells in Cell.AtLeastOnceDelimitedBy(Token.EqualTo(TokenKind.Comma))
-        from source in Token.EqualTo(TokenKind.Source).IgnoreThen(ExpressionGrammar.Text).Select(t => (TextValueSyntax?)t).OptionalOrDefault()
+        from source in Token.EqualTo(TokenKind.Source).Where(s => s.Span.Position.Line == row.Span.Position.Line)
+            .IgnoreThen(ExpressionGrammar.Text).Select(t => (TextValueSyntax?)t).Try().OptionalOrDefault()
         select new TableRowSyntax(Of(row).Cover(source?.Span ?? cells[^1].Span), key.ToStringValue(), Of(key), cells, source);
 
     private static readonly TokenListParser<TokenKind, (string Keyword, TextSpan Span, object? Node)> Clause =
