@@ -94,8 +94,8 @@ public class ScrewsLibraryTests
     public void A_thread_that_just_holds_is_at_most_fifty_percent_efficient()
     {
         // [pub] Adaptive Books "Statics" §5.6, Problem 3: the maximum efficiency of a self-locking screw is 50 %
-        // (at λ = ρ′ the efficiency is tan λ / tan 2λ = (1 − tan² λ)/2).
-        Screw.Sample(s =>
+        // (at λ = ρ′ the efficiency is tan λ / tan 2λ = (1 − tan² λ)/2). Leads steep enough to need f ≥ 1 are left out.
+        Screw.Where(s => s.L / (Math.PI * s.Dm) < 0.9).Sample(s =>
         {
             var r = RunLibrary($"""
                 f_0 = locking_friction(d_m: {N(s.Dm)} mm, lead: {N(s.L)} mm/rev, alpha: {N(s.Alpha)} deg)
@@ -143,6 +143,13 @@ public class ScrewsLibraryTests
             "f_lock = locking_friction(d_m: 29 mm, lead: 6 mm/rev, alpha: 15 deg)",
             "self_locking_margin(d_m: 29 mm, lead: 6 mm/rev, f: f_lock * (1 - 1e-6), alpha: 15 deg)",
             "self_locking_margin(d_m: 29 mm, lead: 6 mm/rev, f: f_lock * (1 + 1e-6), alpha: 15 deg)",
+            "CUT4102"
+        },
+        {
+            "self-locking margin below the required vibration margin",
+            "f_lock = locking_friction(d_m: 29 mm, lead: 6 mm/rev, alpha: 15 deg)",
+            "self_locking_margin(d_m: 29 mm, lead: 6 mm/rev, f: 1.25 * f_lock * (1 - 1e-6), alpha: 15 deg, required: 1.25)",
+            "self_locking_margin(d_m: 29 mm, lead: 6 mm/rev, f: 1.25 * f_lock * (1 + 1e-6), alpha: 15 deg, required: 1.25)",
             "CUT4102"
         },
         {
