@@ -130,6 +130,7 @@ public static class DiagnosticMessages
         $"{function} requires {condition}{(why is null ? "" : ": " + why)}";
     public static string InterpolationPoints(int xs, int ys) => $"interpolate needs two lists of at least two points and equal length, got {xs} and {ys}";
     public static string ListMismatch(int left, int right) => $"lists of different lengths ({left} and {right}) cannot be combined";
+    public static string ExponentLimit(int max) => FormattableString.Invariant($"a dimension exponent beyond ±{max}");
     public static string LimitExceeded(string what) => $"evaluation limit reached: {what}";
     public static string TypeMismatch(string expected, string got) => $"expected {expected}, got {got}";
     public static string MissingRow(string table, string key) => $"table {table} has no row for {key}";

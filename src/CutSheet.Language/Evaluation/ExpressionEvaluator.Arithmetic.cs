@@ -215,6 +215,10 @@ internal sealed partial class ExpressionEvaluator
         {
             result = Dimension.None;
         }
+        else if (Rational.TryFrom(exponent, out int pp, out int qq) && !dim.CanPow(pp, qq))
+        {
+            return Error(f, DiagnosticCodes.LimitExceeded, b.Span, DiagnosticMessages.LimitExceeded(DiagnosticMessages.ExponentLimit(Dimension.MaxExponent)));
+        }
         else if (!Rational.TryFrom(exponent, out int p, out int q) || !dim.TryPow(p, q, out result))
         {
             return Error(f, DiagnosticCodes.NonIntegerExponent, b.Span,

@@ -108,6 +108,8 @@ internal sealed partial class ExpressionEvaluator
         if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, vSyntax.Span, "a quantity", v);
         var (ad, at) = DimensionOf(acc);
         var (vd, vt) = DimensionOf(v);
+        if (!Dimension.CanCombine(ad, vd, divide ? -1 : 1))
+            return Error(f, DiagnosticCodes.LimitExceeded, root.Span, DiagnosticMessages.LimitExceeded(DiagnosticMessages.ExponentLimit(Dimension.MaxExponent)));
         var dim = divide ? ad / vd : ad * vd;
         // A plain number keeps the other side's kind (T / eta is still a torque).
         Kind? tag = vd.IsNone ? at : ad.IsNone && !divide ? vt : null;

@@ -58,12 +58,10 @@ public static class SheetGrammarGen
         (2, Gen.Select(Gen.OneOf(Names), Expr, (n, e) => $"  where {n} = {e}")),
         (2, Gen.Select(Gen.OneOf("caution", "notice", "warning"), Expr, (l, e) => $"  {l} \"hazard\" when {e}")));
 
-    // Parameter defaults are kept to literals and names. A default that calls a function is
-    // reported to the lead: when the function is recursive through its defaults, evaluation
-    // grows exponentially with the number of such parameters (a hang), which a bounded run
-    // cannot tolerate the way KnownDefects tolerates a known exception.
+    // Defaults include calls, so recursion through defaults (once a hang) is exercised too.
     private static readonly Gen<string> Parameter =
-        Gen.Select(Gen.OneOf(Parameters), Gen.OneOf(Kinds), Expression(0), Gen.Int[0, 2], (p, k, d, hasDefault) => hasDefault == 0 ? $"{p}: {k} = {d}" : $"{p}: {k}");
+        Gen.Select(Gen.OneOf(Parameters), Gen.OneOf(Kinds), Gen.Frequency((3, Expression(0)), (1, Gen.OneOf(Functions).Select(fn => fn + "()"))), Gen.Int[0, 2],
+            (p, k, d, hasDefault) => hasDefault == 0 ? $"{p}: {k} = {d}" : $"{p}: {k}");
 
     private static readonly Gen<string> Statement = Gen.Frequency(
         (8, Gen.Select(Gen.OneOf(Names), Expr, Gen.Frequency((3, Gen.Const("")), (1, Gen.OneOf(Units).Select(u => " as " + u))),
