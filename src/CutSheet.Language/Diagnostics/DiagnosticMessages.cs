@@ -121,6 +121,30 @@ public static class DiagnosticMessages
         $"{function} is used outside its validity ({condition}){(why is null ? "" : ": " + why)}; the result is an extrapolation";
     public static string CautionAccepted(string message, string reason) => $"{message} (accepted: {reason})";
 
+    // Details of evaluation errors in built-in functions.
+    public const string InverseTrigRange = "the argument must lie between −1 and 1";
+    public const string NegativeSquareRoot = "the square root of a negative value has no real value";
+    public const string LogarithmOfNonPositive = "the logarithm needs a positive number";
+    public const string StepNotPositive = "the step must be positive";
+    public const string EmptyList = "the list is empty";
+    public const string PowerMeanArguments = "needs a non-empty list and a non-zero power";
+    public const string PointsNotAscending = "the points must be in ascending order";
+    public const string OutsideCurve = "the value lies outside the table; a curve is not extrapolated";
+    public const string NegativeFractionalPower = "a negative number to a fractional power has no real value";
+
+    /// <summary>The signal word a caution's message starts with (ISO 3864-2 / ANSI Z535 levels).</summary>
+    public static string SignalWord(Syntax.Nodes.CautionLevel level) => level switch
+    {
+        Syntax.Nodes.CautionLevel.Notice => "NOTICE",
+        Syntax.Nodes.CautionLevel.Warning => "WARNING",
+        _ => "CAUTION",
+    };
+
+    public static string Caution(Syntax.Nodes.CautionLevel level, string message) => $"{SignalWord(level)}: {message}";
+
+    public static string LibraryNotFound(string name, string? suggestion, IEnumerable<string> names) =>
+        ImportNotFound(name) + (suggestion is null ? $"; library sheets: {string.Join(", ", names)}" : $"; did you mean {suggestion}?");
+
     // Evaluation
     public const string DivisionByZero = "division by zero";
     public static string DomainError(string function, string detail) => $"{function}: {detail}";

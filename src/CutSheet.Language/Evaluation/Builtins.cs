@@ -98,7 +98,7 @@ internal static class Builtins
                 if (!Plain(args, 0, ArgSpan(0), name, out double x, ref problem)) return Value.Unknown;
                 if (name != "atan" && (x < -1 - 1e-12 || x > 1 + 1e-12))
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the argument must lie between −1 and 1"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.InverseTrigRange));
                     return Value.Unknown;
                 }
                 x = Math.Clamp(x, -1e300, 1e300);
@@ -126,7 +126,7 @@ internal static class Builtins
                 }
                 if (root == 2 && q.Si < 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the square root of a negative value has no real value"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.NegativeSquareRoot));
                     return Value.Unknown;
                 }
                 return Value.Of(new Quantity(root == 2 ? Math.Sqrt(q.Si) : Math.Cbrt(q.Si), dim));
@@ -144,7 +144,7 @@ internal static class Builtins
                 if (!Plain(args, 0, ArgSpan(0), name, out double x, ref problem)) return Value.Unknown;
                 if (name != "exp" && x <= 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the logarithm needs a positive number"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.LogarithmOfNonPositive));
                     return Value.Unknown;
                 }
                 return Value.Of(new Quantity(name == "exp" ? Math.Exp(x) : name == "ln" ? Math.Log(x) : Math.Log10(x), Dimension.None));
@@ -159,7 +159,7 @@ internal static class Builtins
                 }
                 if (step.Si <= 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(1), DiagnosticMessages.DomainError(name, "the step must be positive"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(1), DiagnosticMessages.DomainError(name, DiagnosticMessages.StepNotPositive));
                     return Value.Unknown;
                 }
                 double steps = x.Si / step.Si;
@@ -174,7 +174,7 @@ internal static class Builtins
                 if (name == "count") return Value.Of(new Quantity(v.Length, Dimension.None));
                 if (v.Length == 0 && name != "sum")
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the list is empty"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.EmptyList));
                     return Value.Unknown;
                 }
                 double r = name switch
@@ -190,7 +190,7 @@ internal static class Builtins
                 if (!ListArg(args, 0, ArgSpan(0), name, out var list, ref problem) || !Plain(args, 1, ArgSpan(1), name, out double p, ref problem)) return Value.Unknown;
                 if (list.Values.Length == 0 || p == 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, span, DiagnosticMessages.DomainError(name, "needs a non-empty list and a non-zero power"));
+                    problem = Fail(DiagnosticCodes.DomainError, span, DiagnosticMessages.DomainError(name, DiagnosticMessages.PowerMeanArguments));
                     return Value.Unknown;
                 }
                 double r = Math.Pow(list.Values.Sum(x => Math.Pow(x, p)) / list.Values.Length, 1 / p);
@@ -235,13 +235,13 @@ internal static class Builtins
         {
             if (!(p[i] > p[i - 1]))
             {
-                problem = (DiagnosticCodes.DomainError, At(1), DiagnosticMessages.DomainError("interpolate", "the points must be in ascending order"));
+                problem = (DiagnosticCodes.DomainError, At(1), DiagnosticMessages.DomainError("interpolate", DiagnosticMessages.PointsNotAscending));
                 return Value.Unknown;
             }
         }
         if (x.Si < p[0] || x.Si > p[^1])
         {
-            problem = (DiagnosticCodes.DomainError, At(0), DiagnosticMessages.DomainError("interpolate", "the value lies outside the table; a curve is not extrapolated"));
+            problem = (DiagnosticCodes.DomainError, At(0), DiagnosticMessages.DomainError("interpolate", DiagnosticMessages.OutsideCurve));
             return Value.Unknown;
         }
         int k = 1;
@@ -279,7 +279,7 @@ internal static class Builtins
         }
         if (values.Count == 0)
         {
-            problem = (DiagnosticCodes.DomainError, call.Span, DiagnosticMessages.DomainError(name, "the list is empty"));
+            problem = (DiagnosticCodes.DomainError, call.Span, DiagnosticMessages.DomainError(name, DiagnosticMessages.EmptyList));
             return Value.Unknown;
         }
         return Value.Of(new Quantity(name == "min" ? values.Min() : values.Max(), dim, tag));

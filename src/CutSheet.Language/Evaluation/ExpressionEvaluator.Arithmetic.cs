@@ -232,7 +232,7 @@ internal sealed partial class ExpressionEvaluator
         }
         double v = Math.Pow(left.Quantity.Si, exponent);
         if (double.IsNaN(v) && left.Quantity.Si < 0)
-            return Error(f, DiagnosticCodes.DomainError, b.Span, DiagnosticMessages.DomainError("power", "a negative number to a fractional power has no real value"));
+            return Error(f, DiagnosticCodes.DomainError, b.Span, DiagnosticMessages.DomainError("power", DiagnosticMessages.NegativeFractionalPower));
         return Finite(f, b.Span, v) ? Value.Of(new Quantity(v, result, resultTag)) : Value.Unknown;
     }
 

@@ -30,7 +30,7 @@ internal sealed partial class SheetEvaluator
                 {
                     var suggestion = ExpressionEvaluator.Suggest(use.Target, LibrarySheets.Names);
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan,
-                        DiagnosticMessages.ImportNotFound(use.Target) + (suggestion is null ? $"; library sheets: {string.Join(", ", LibrarySheets.Names)}" : $"; did you mean {suggestion}?")));
+                        DiagnosticMessages.LibraryNotFound(use.Target, suggestion, LibrarySheets.Names)));
                     continue;
                 }
                 _importNames.Add($"{use.Target} (library {LibrarySheets.Version})");
