@@ -18,6 +18,7 @@ public static class DiagnosticMessages
         ? $"'{written}' uses a comma as decimal mark or thousands separator; write a decimal point and no separators"
         : $"'{written}' uses a decimal comma; write a decimal point: {fixedText}";
     public const string UnbalancedBracket = "a bracket is not closed on this statement";
+    public const string StrayClosingBracket = "this closing bracket has no opening bracket before it";
     public static string Incomplete(string what) => $"the statement ends early: {what}";
     public const string NestingTooDeep = "the expression is nested too deeply (more than 64 levels)";
     public const string NotAStatement = "a line must define a name (name = …), a function, a check, a caution, a heading or a setting";
@@ -27,7 +28,7 @@ public static class DiagnosticMessages
     // Units
     public const string EmptyUnit = "the unit is empty";
     public static string UnexpectedInUnit(string c, string unit) => $"'{c}' cannot appear in the unit '{unit}'";
-    public static string BadUnitExponent(int n) => $"a unit exponent must be a whole number from -12 to 12 other than 0, not {n}";
+    public static string BadUnitExponent(int n) => FormattableString.Invariant($"a unit exponent must be a whole number from -12 to 12 other than 0, not {n}");
     public const string MissingUnitExponent = "a unit power needs a whole-number exponent, e.g. m^2 or s^-1";
     public const string UnitEndsEarly = "the unit ends early";
     public const string UnclosedUnitParen = "a parenthesis in the unit is not closed";
@@ -56,16 +57,21 @@ public static class DiagnosticMessages
     public const string AngleInserted = "a plain frequency shown as an angular velocity: 1 s⁻¹ is read as 1 rad/s; if it counts revolutions or cycles, write ω = 2 * pi * n";
     public static string CountMix(string leftUnit, string rightUnit) =>
         $"{leftUnit} and {rightUnit} count different things (e.g. a lead per revolution and a plain length); check that this is meant";
-    public static string KindMismatch(string op, string leftKind, string rightKind) => $"cannot {op} a {leftKind} and a {rightKind}";
+    public static string KindMismatch(string op, string leftKind, string rightKind) =>
+        $"cannot {op} {leftKind.Replace('_', ' ')} and {rightKind.Replace('_', ' ')}: they are different kinds of quantity (ISO 80000)";
+    public static string UnknownChoice(string name, string? suggestion) =>
+        suggestion is null ? $"'{name}' is not a choice" : $"'{name}' is not a choice; did you mean '{suggestion}'?";
 
     public static string ArgumentDimension(string function, string parameter, Kind expected, string gotUnit, Dimension got) =>
         $"{function}: '{parameter}' expects {expected.Description} ({expected.Dimension.ToSiString()}), got {gotUnit} ({Kinds.Describe(got)}, {got.ToSiString()})";
     public static string ArgumentRotation(string function, string parameter, Kind expected, string gotUnit) =>
         $"{function}: '{parameter}' expects {expected.Description}, got {gotUnit}, which differs by 2π; convert with 'as'";
-    public static string ArgumentCount(string function, string parameter, Kind expected, string gotUnit, Dimension got) =>
-        $"{function}: '{parameter}' expects {expected.Description}, got {gotUnit} ({Kinds.Describe(got)}); a lead is not a pitch — convert with 'as' if this is meant";
+    public static string ArgumentCount(string function, string parameter, Kind expected, string gotUnit, string what) =>
+        $"{function}: '{parameter}' expects {expected.Description}, got {gotUnit}: {what}; convert with 'as' if this is meant";
     public static string ArgumentKind(string function, string parameter, Kind expected, Kind got) =>
         $"{function}: '{parameter}' expects {expected.Description}, got {got.Description}";
+    public static string DeclaredKindMismatch(string function, string parameter, Kind expected, Kind got) =>
+        $"{function}: '{parameter}' expects {expected.Description}, got {got.Description}; the two are not interchangeable — check which one the formula needs";
     public static string ReturnKind(string function, Kind declared, string gotUnit, Dimension got) =>
         $"{function} declares {declared.Description} ({declared.Dimension.ToSiString()}) but its formula gives {gotUnit} ({Kinds.Describe(got)}, {got.ToSiString()})";
     public const string TorqueTimesRpm = "torque × rotational frequency without 2π: power is P = 2π·n·T (n in rev/min), or T·ω with ω in rad/s";
@@ -81,6 +87,7 @@ public static class DiagnosticMessages
         $"'{name}' is used on line {useLine} before its definition on line {defLine}; a sheet reads top to bottom";
     public static string MoveLineFix(string name, int toLine) => $"move the definition of '{name}' before line {toLine}";
     public static string Redefinition(string name, int firstLine) => $"'{name}' is already defined on line {firstLine}; a name is defined once";
+    public static string RedefinitionOfBuiltin(string name) => $"'{name}' is built into the language and cannot be defined again";
     public static string ImportedRedefinition(string name, string from) =>
         $"'{name}' is imported from {from}; to change an imported input, write it in the import: use {from} with ({name} = …)";
     public static string UnknownFunction(string name, string? suggestion) =>
@@ -114,13 +121,40 @@ public static class DiagnosticMessages
         $"{function} is used outside its validity ({condition}){(why is null ? "" : ": " + why)}; the result is an extrapolation";
     public static string CautionAccepted(string message, string reason) => $"{message} (accepted: {reason})";
 
+    // Details of evaluation errors in built-in functions.
+    public const string InverseTrigRange = "the argument must lie between −1 and 1";
+    public const string NegativeSquareRoot = "the square root of a negative value has no real value";
+    public const string LogarithmOfNonPositive = "the logarithm needs a positive number";
+    public const string StepNotPositive = "the step must be positive";
+    public const string EmptyList = "the list is empty";
+    public const string PowerMeanArguments = "needs a non-empty list and a non-zero power";
+    public const string PointsNotAscending = "the points must be in ascending order";
+    public const string OutsideCurve = "the value lies outside the table; a curve is not extrapolated";
+    public const string NegativeFractionalPower = "a negative number to a fractional power has no real value";
+
+    /// <summary>The signal word a caution's message starts with (ISO 3864-2 / ANSI Z535 levels).</summary>
+    public static string SignalWord(Syntax.Nodes.CautionLevel level) => level switch
+    {
+        Syntax.Nodes.CautionLevel.Notice => "NOTICE",
+        Syntax.Nodes.CautionLevel.Warning => "WARNING",
+        _ => "CAUTION",
+    };
+
+    public static string Caution(Syntax.Nodes.CautionLevel level, string message) => $"{SignalWord(level)}: {message}";
+
+    public static string LibraryNotFound(string name, string? suggestion, IEnumerable<string> names) =>
+        ImportNotFound(name) + (suggestion is null ? $"; library sheets: {string.Join(", ", names)}" : $"; did you mean {suggestion}?");
+
     // Evaluation
     public const string DivisionByZero = "division by zero";
     public static string DomainError(string function, string detail) => $"{function}: {detail}";
     public const string NotFinite = "the result is not a finite number";
+    public static string NumberNotFinite(string written) => $"'{written}' is not a finite number (too large, or a fraction over zero)";
     public static string RequirementFailed(string function, string condition, string? why) =>
         $"{function} requires {condition}{(why is null ? "" : ": " + why)}";
+    public static string InterpolationPoints(int xs, int ys) => $"interpolate needs two lists of at least two points and equal length, got {xs} and {ys}";
     public static string ListMismatch(int left, int right) => $"lists of different lengths ({left} and {right}) cannot be combined";
+    public static string ExponentLimit(int max) => FormattableString.Invariant($"a dimension exponent beyond ±{max}");
     public static string LimitExceeded(string what) => $"evaluation limit reached: {what}";
     public static string TypeMismatch(string expected, string got) => $"expected {expected}, got {got}";
     public static string MissingRow(string table, string key) => $"table {table} has no row for {key}";

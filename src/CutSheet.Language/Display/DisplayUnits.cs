@@ -87,7 +87,7 @@ public static class DisplayUnits
                 if (unit is null) continue;
                 if (best is null || Math.Abs(si) / unit.Factor >= 1) best = unit;
             }
-            if (best is not null) return best with { Dimension = dimension };
+            if (best is not null) return best;
         }
         return SiUnit(dimension);
     }

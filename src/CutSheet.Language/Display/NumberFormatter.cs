@@ -1,69 +1,99 @@
 using System.Globalization;
+using System.Text;
 
 namespace CutSheet.Language.Display;
 
 /// <summary>
 /// Writes numbers for people: a given count of significant figures, rounded half away from
-/// zero on the decimal value the double stands for (so 2.675 rounds to 2.68 at three figures,
-/// as a reader expects), trailing zeros kept because they state the precision, plain notation
-/// from 10⁻⁴ to below 10¹⁰ and scientific notation (<c>1.235e-05</c>) outside it. Always the
-/// invariant culture: a decimal point, no group separators.
+/// zero on the decimal value the double stands for, read to 15 significant figures first so
+/// that floating-point noise does not decide (2.675 rounds to 2.68, and 60.325 + 1 to 61.33,
+/// although both doubles lie a hair below the half), trailing zeros kept because they state the
+/// precision, plain notation from 10⁻⁴ to below 10¹⁰ (judged
+/// after rounding) and scientific notation (<c>1.235e-05</c>) outside it. Always the invariant
+/// culture: a decimal point, no group separators. Never throws.
 /// </summary>
 public static class NumberFormatter
 {
     public static string Format(double value, int digits)
     {
-        digits = Math.Clamp(digits, 1, 15);
+        digits = Math.Clamp(digits, 1, 17);
         if (double.IsNaN(value)) return "NaN";
         if (double.IsInfinity(value)) return value > 0 ? "∞" : "−∞";
         if (value == 0) return digits > 1 ? "0." + new string('0', digits - 1) : "0";
-        double abs = Math.Abs(value);
-        if (abs >= 1e-4 && abs < 1e10) return Plain(value, digits);
-        return Scientific(value, digits);
+
+        var (negative, mantissa, exponent) = Decompose(value, digits);
+        var (rounded, exp10) = Round(mantissa, exponent, digits);
+        var sb = new StringBuilder(digits + 8);
+        if (negative) sb.Append('-');
+        if (exp10 >= -4 && exp10 < 10) WritePlain(sb, rounded, exp10);
+        else WriteScientific(sb, rounded, exp10);
+        return sb.ToString();
     }
 
     /// <summary>The shortest text that reads back to exactly the same double (for JSON and tests).</summary>
     public static string RoundTrip(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 
-    private static string Plain(double value, int digits)
+    /// <summary>The decimal digits of the value (15 significant, or the shortest exact text when more are asked for) and the power of ten of the first digit.</summary>
+    private static (bool Negative, string Digits, int Exponent) Decompose(double value, int digits)
     {
-        decimal d = (decimal)value;
-        int exponent = (int)Math.Floor(Math.Log10(Math.Abs(value)));
-        decimal rounded = RoundSignificant(d, digits, exponent);
-        if (rounded != 0)
+        string r = Math.Abs(value).ToString(digits <= 15 ? "E14" : "R", CultureInfo.InvariantCulture);
+        // "R" may be plain or scientific; normalise it to digits and an exponent.
+        int ePos = r.IndexOfAny(['E', 'e']);
+        int exp = 0;
+        string body = r;
+        if (ePos >= 0)
         {
-            int e2 = (int)Math.Floor(Math.Log10((double)Math.Abs(rounded)));
-            if (e2 != exponent) { exponent = e2; rounded = RoundSignificant(d, digits, exponent); }
+            exp = int.Parse(r.AsSpan(ePos + 1), NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture);
+            body = r[..ePos];
         }
-        int decimals = Math.Max(0, digits - 1 - exponent);
-        return rounded.ToString("F" + decimals, CultureInfo.InvariantCulture);
+        int dot = body.IndexOf('.');
+        string intPart = dot < 0 ? body : body[..dot];
+        string fracPart = dot < 0 ? "" : body[(dot + 1)..];
+        string all = (intPart + fracPart).TrimStart('0');
+        int leadingZeros = (intPart + fracPart).Length - all.Length;
+        int firstDigitExponent = intPart.Length - 1 - leadingZeros + exp;
+        all = all.TrimEnd('0');
+        if (all.Length == 0) all = "0";
+        return (value < 0, all, firstDigitExponent);
     }
 
-    private static decimal RoundSignificant(decimal d, int digits, int exponent)
+    /// <summary>Rounds a digit string half away from zero to <paramref name="digits"/> figures.</summary>
+    private static (string Digits, int Exponent) Round(string mantissa, int exponent, int digits)
     {
-        int decimals = digits - 1 - exponent;
-        if (decimals >= 0) return Math.Round(d, Math.Min(decimals, 28), MidpointRounding.AwayFromZero);
-        decimal scale = Pow10(-decimals);
-        return Math.Round(d / scale, 0, MidpointRounding.AwayFromZero) * scale;
-    }
-
-    private static decimal Pow10(int n)
-    {
-        decimal r = 1;
-        for (int i = 0; i < n; i++) r *= 10;
-        return r;
-    }
-
-    private static string Scientific(double value, int digits)
-    {
-        int exponent = (int)Math.Floor(Math.Log10(Math.Abs(value)));
-        double mantissa = value / Math.Pow(10, exponent);
-        string m = Plain(mantissa, digits);
-        if (m.StartsWith("10", StringComparison.Ordinal) || m.StartsWith("-10", StringComparison.Ordinal))
+        if (mantissa.Length <= digits) return (mantissa.PadRight(digits, '0'), exponent);
+        var d = mantissa[..digits].ToCharArray();
+        if (mantissa[digits] >= '5')
         {
-            exponent++;
-            m = Plain(value / Math.Pow(10, exponent), digits);
+            int i = digits - 1;
+            while (i >= 0)
+            {
+                if (d[i] == '9') { d[i] = '0'; i--; }
+                else { d[i]++; break; }
+            }
+            if (i < 0) return ("1" + new string(d, 0, digits - 1), exponent + 1);
         }
-        return m + "e" + (exponent < 0 ? "-" : "+") + Math.Abs(exponent).ToString("00", CultureInfo.InvariantCulture);
+        return (new string(d), exponent);
+    }
+
+    private static void WritePlain(StringBuilder sb, string digits, int exp10)
+    {
+        if (exp10 < 0)
+        {
+            sb.Append("0.").Append('0', -exp10 - 1).Append(digits);
+            return;
+        }
+        if (digits.Length <= exp10 + 1)
+        {
+            sb.Append(digits).Append('0', exp10 + 1 - digits.Length);
+            return;
+        }
+        sb.Append(digits, 0, exp10 + 1).Append('.').Append(digits, exp10 + 1, digits.Length - exp10 - 1);
+    }
+
+    private static void WriteScientific(StringBuilder sb, string digits, int exp10)
+    {
+        sb.Append(digits[0]);
+        if (digits.Length > 1) sb.Append('.').Append(digits, 1, digits.Length - 1);
+        sb.Append('e').Append(exp10 < 0 ? '-' : '+').Append(Math.Abs(exp10).ToString("00", CultureInfo.InvariantCulture));
     }
 }

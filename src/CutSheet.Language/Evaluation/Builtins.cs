@@ -38,11 +38,14 @@ internal static class Builtins
         ("ln", "ln(ratio)", "natural logarithm of a positive plain number"),
         ("log10", "log10(ratio)", "decimal logarithm of a positive plain number"),
         ("round", "round(x, step)", "x rounded to a multiple of step (half away from zero)"),
+        ("floor", "floor(x, step)", "the largest multiple of step not above x"),
+        ("ceil", "ceil(x, step)", "the smallest multiple of step not below x"),
         ("sum", "sum(list)", "sum of a list"),
         ("mean", "mean(list)", "arithmetic mean of a list"),
         ("rms", "rms(list)", "root mean square of a list"),
         ("count", "count(list)", "number of values in a list"),
         ("power_mean", "power_mean(list, p)", "(Σ xᵢᵖ / n)^(1/p), e.g. the cubic mean of a load spectrum"),
+        ("interpolate", "interpolate(x, xs, ys)", "y at x by straight lines between the points (xs ascending), e.g. a motor's torque–speed curve; outside the points is an error"),
     ];
 
     public static IEnumerable<string> FunctionNames => Functions.Select(f => f.Name);
@@ -58,7 +61,8 @@ internal static class Builtins
 
         int expected = name switch
         {
-            "atan2" or "round" or "power_mean" => 2,
+            "atan2" or "round" or "floor" or "ceil" or "power_mean" => 2,
+            "interpolate" => 3,
             "min" or "max" => -1,
             _ => 1,
         };
@@ -94,7 +98,7 @@ internal static class Builtins
                 if (!Plain(args, 0, ArgSpan(0), name, out double x, ref problem)) return Value.Unknown;
                 if (name != "atan" && (x < -1 - 1e-12 || x > 1 + 1e-12))
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the argument must lie between −1 and 1"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.InverseTrigRange));
                     return Value.Unknown;
                 }
                 x = Math.Clamp(x, -1e300, 1e300);
@@ -122,7 +126,7 @@ internal static class Builtins
                 }
                 if (root == 2 && q.Si < 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the square root of a negative value has no real value"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.NegativeSquareRoot));
                     return Value.Unknown;
                 }
                 return Value.Of(new Quantity(root == 2 ? Math.Sqrt(q.Si) : Math.Cbrt(q.Si), dim));
@@ -140,12 +144,12 @@ internal static class Builtins
                 if (!Plain(args, 0, ArgSpan(0), name, out double x, ref problem)) return Value.Unknown;
                 if (name != "exp" && x <= 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the logarithm needs a positive number"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.LogarithmOfNonPositive));
                     return Value.Unknown;
                 }
                 return Value.Of(new Quantity(name == "exp" ? Math.Exp(x) : name == "ln" ? Math.Log(x) : Math.Log10(x), Dimension.None));
             }
-            case "round":
+            case "round" or "floor" or "ceil":
             {
                 if (!Scalar(args, 0, ArgSpan(0), out var x, ref problem) || !Scalar(args, 1, ArgSpan(1), out var step, ref problem)) return Value.Unknown;
                 if (!x.Dimension.SiEquals(step.Dimension))
@@ -155,10 +159,13 @@ internal static class Builtins
                 }
                 if (step.Si <= 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(1), DiagnosticMessages.DomainError(name, "the step must be positive"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(1), DiagnosticMessages.DomainError(name, DiagnosticMessages.StepNotPositive));
                     return Value.Unknown;
                 }
-                return Value.Of(x with { Si = RoundToStep(x.Si, step.Si) });
+                double steps = x.Si / step.Si;
+                double result = name == "round" ? RoundToStep(x.Si, step.Si)
+                    : (name == "floor" ? Math.Floor(steps + 1e-12) : Math.Ceiling(steps - 1e-12)) * step.Si;
+                return Value.Of(x with { Si = result });
             }
             case "sum" or "mean" or "rms" or "count":
             {
@@ -167,7 +174,7 @@ internal static class Builtins
                 if (name == "count") return Value.Of(new Quantity(v.Length, Dimension.None));
                 if (v.Length == 0 && name != "sum")
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, "the list is empty"));
+                    problem = Fail(DiagnosticCodes.DomainError, ArgSpan(0), DiagnosticMessages.DomainError(name, DiagnosticMessages.EmptyList));
                     return Value.Unknown;
                 }
                 double r = name switch
@@ -183,13 +190,14 @@ internal static class Builtins
                 if (!ListArg(args, 0, ArgSpan(0), name, out var list, ref problem) || !Plain(args, 1, ArgSpan(1), name, out double p, ref problem)) return Value.Unknown;
                 if (list.Values.Length == 0 || p == 0)
                 {
-                    problem = Fail(DiagnosticCodes.DomainError, span, DiagnosticMessages.DomainError(name, "needs a non-empty list and a non-zero power"));
+                    problem = Fail(DiagnosticCodes.DomainError, span, DiagnosticMessages.DomainError(name, DiagnosticMessages.PowerMeanArguments));
                     return Value.Unknown;
                 }
                 double r = Math.Pow(list.Values.Sum(x => Math.Pow(x, p)) / list.Values.Length, 1 / p);
                 return Value.Of(new Quantity(r, list.Dimension, list.Tag));
             }
         }
+        if (name == "interpolate") return Interpolate(args, call, ref problem);
         problem = Fail(DiagnosticCodes.UnknownFunction, span, DiagnosticMessages.UnknownFunction(name, null));
         return Value.Unknown;
     }
@@ -204,6 +212,43 @@ internal static class Builtins
             return (double)d * step;
         }
         return x;
+    }
+
+    /// <summary>Linear interpolation in a table of points; the points must be ascending and x within them.</summary>
+    private static Value Interpolate(Value[] args, CallSyntax call, ref (string, TextSpan, string)? problem)
+    {
+        TextSpan At(int i) => call.Arguments[i].Value.Span;
+        if (!Scalar(args, 0, At(0), out var x, ref problem)) return Value.Unknown;
+        if (!ListArg(args, 1, At(1), "interpolate", out var xs, ref problem) || !ListArg(args, 2, At(2), "interpolate", out var ys, ref problem)) return Value.Unknown;
+        if (xs.Values.Length != ys.Values.Length || xs.Values.Length < 2)
+        {
+            problem = (DiagnosticCodes.ListMismatch, call.Span, DiagnosticMessages.InterpolationPoints(xs.Values.Length, ys.Values.Length));
+            return Value.Unknown;
+        }
+        if (!x.Dimension.SiEquals(xs.Dimension))
+        {
+            problem = (DiagnosticCodes.DimensionMismatch, At(0), DiagnosticMessages.DimensionMismatch("look up", Describe(x), x.Dimension, "points in " + Describe(new Quantity(xs.Values[0], xs.Dimension)), xs.Dimension));
+            return Value.Unknown;
+        }
+        var p = xs.Values;
+        for (int i = 1; i < p.Length; i++)
+        {
+            if (!(p[i] > p[i - 1]))
+            {
+                problem = (DiagnosticCodes.DomainError, At(1), DiagnosticMessages.DomainError("interpolate", DiagnosticMessages.PointsNotAscending));
+                return Value.Unknown;
+            }
+        }
+        if (x.Si < p[0] || x.Si > p[^1])
+        {
+            problem = (DiagnosticCodes.DomainError, At(0), DiagnosticMessages.DomainError("interpolate", DiagnosticMessages.OutsideCurve));
+            return Value.Unknown;
+        }
+        int k = 1;
+        while (k < p.Length - 1 && x.Si > p[k]) k++;
+        double t = (x.Si - p[k - 1]) / (p[k] - p[k - 1]);
+        double y = ys.Values[k - 1] + t * (ys.Values[k] - ys.Values[k - 1]);
+        return Value.Of(new Quantity(y, ys.Dimension, ys.Tag));
     }
 
     private static Value Extreme(string name, Value[] args, CallSyntax call, ref (string, TextSpan, string)? problem)
@@ -234,7 +279,7 @@ internal static class Builtins
         }
         if (values.Count == 0)
         {
-            problem = (DiagnosticCodes.DomainError, call.Span, DiagnosticMessages.DomainError(name, "the list is empty"));
+            problem = (DiagnosticCodes.DomainError, call.Span, DiagnosticMessages.DomainError(name, DiagnosticMessages.EmptyList));
             return Value.Unknown;
         }
         return Value.Of(new Quantity(name == "min" ? values.Min() : values.Max(), dim, tag));

@@ -13,8 +13,7 @@ internal static class CautionDiagnostics
 {
     public static Diagnostic For(CautionResult c)
     {
-        string word = c.Level switch { CautionLevel.Notice => "NOTICE", CautionLevel.Warning => "WARNING", _ => "CAUTION" };
-        string message = $"{word}: {c.Message}";
+        string message = DiagnosticMessages.Caution(c.Level, c.Message);
         if (c.IsAccepted)
             return Diagnostic.Info(DiagnosticCodes.CautionAccepted, c.Span, DiagnosticMessages.CautionAccepted(message, c.AcceptedReason!));
         string code = c.Code ?? c.Level switch

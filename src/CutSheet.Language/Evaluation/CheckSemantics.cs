@@ -9,8 +9,9 @@ namespace CutSheet.Language.Evaluation;
 /// <item><c>value &gt;= limit</c>: utilisation = limit/value, margin = value − limit.</item>
 /// <item><c>value == target within tol</c>: utilisation = |value − target|/tol, margin = tol − |value − target|.</item>
 /// </list>
-/// Utilisation is defined only where it means "how much of the allowance is used": both sides
-/// at least zero and the divisor positive; otherwise it is null and the margin alone speaks.
+/// Utilisation is defined only where it means "how much of the allowance is used": a positive
+/// limit and a value that is not negative (positive for <c>&gt;=</c>); otherwise it is null and
+/// the margin alone speaks.
 /// The margin is positive on the safe side. Comparisons absorb only floating-point noise.
 /// </summary>
 public static class CheckSemantics
@@ -30,7 +31,7 @@ public static class CheckSemantics
             case BinaryOperator.GreaterEqual or BinaryOperator.Greater:
             {
                 bool passed = ExpressionEvaluator.CompareNumbers(op, value, limit);
-                double? u = value > 0 && limit >= 0 ? limit / value : null;
+                double? u = value > 0 && limit > 0 ? limit / value : null;
                 return new Outcome(passed, u, value - limit);
             }
             case BinaryOperator.Equal when tolerance is double tol:

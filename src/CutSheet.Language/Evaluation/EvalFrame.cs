@@ -26,18 +26,6 @@ internal sealed class EvalFrame
     /// <summary>The function being evaluated, for messages and cautions.</summary>
     public FunctionSymbol? Function { get; init; }
 
-    private bool? _mentionsPi;
-
-    /// <summary>The formula being evaluated, scanned for π only when a rotation trap needs to know.</summary>
-    public Syntax.Nodes.ExpressionSyntax? Formula { get; init; }
-
-    /// <summary>True when the formula being evaluated mentions π (suppresses forgotten-2π cautions).</summary>
-    public bool MentionsPi
-    {
-        get => _mentionsPi ??= Formula is not null && PiScanner.Mentions(Formula);
-        init => _mentionsPi = value;
-    }
-
     /// <summary>Set when the statement refers to a definition of the evaluated sheet (so it is not an input).</summary>
     public bool RecordDependencies { get; init; }
 

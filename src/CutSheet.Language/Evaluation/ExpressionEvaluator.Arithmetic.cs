@@ -1,4 +1,5 @@
 using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Semantics;
 using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Text;
 using CutSheet.Language.Units;
@@ -86,6 +87,8 @@ internal sealed partial class ExpressionEvaluator
 
     private Value AddSubtract(BinarySyntax b, BinaryOperator op, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
     {
+        WarnOffsetScale(ls, f);
+        WarnOffsetScale(rs, f);
         if (left.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, ls.Span, "a quantity", left);
         if (right.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, rs.Span, "a quantity", right);
         var (ld, lt) = DimensionOf(left);
@@ -101,8 +104,12 @@ internal sealed partial class ExpressionEvaluator
             return Error(f, DiagnosticCodes.KindMismatch, b.OperatorSpan, DiagnosticMessages.KindMismatch(verb, lt.Name, rt.Name));
         }
         var tag = lt ?? rt;
-        double sign = op == BinaryOperator.Add ? 1 : -1;
-        return Elementwise(f, b.Span, left, right, (x, y) => x + sign * y, ld, tag);
+        if (left.Kind == ValueKind.Quantity && right.Kind == ValueKind.Quantity)
+        {
+            double v = op == BinaryOperator.Add ? left.Quantity.Si + right.Quantity.Si : left.Quantity.Si - right.Quantity.Si;
+            return Finite(f, b.Span, v) ? Value.Of(new Quantity(v, ld, tag)) : Value.Unknown;
+        }
+        return Elementwise(f, b.Span, left, right, op == BinaryOperator.Add ? static (x, y) => x + y : static (x, y) => x - y, ld, tag);
     }
 
     /// <summary>Soft factors must agree: revolutions against radians is an error (2π apart); other counts only warn.</summary>
@@ -116,6 +123,18 @@ internal sealed partial class ExpressionEvaluator
         }
         Warn(f, DiagnosticCodes.CountMix, at, DiagnosticMessages.CountMix(Label(ls, Sample(left), f), Label(rs, Sample(right), f)));
         return true;
+    }
+
+    /// <summary>A temperature on a scale with an offset (°C, °F) is an absolute temperature here; arithmetic on it rarely means that.</summary>
+    private void WarnOffsetScale(ExpressionSyntax operand, EvalFrame f)
+    {
+        bool offset = operand switch
+        {
+            QuantityLiteralSyntax { Unit: { } u } => UnitCatalog.Default.Resolve(u.Text).Unit?.HasOffset == true,
+            NameSyntax { Qualifier: null } n => f.Scope.Find(n.Name) is DefinitionSymbol { DisplayUnit.HasOffset: true },
+            _ => false,
+        };
+        if (offset) Warn(f, DiagnosticCodes.OffsetArithmetic, operand.Span, DiagnosticMessages.OffsetArithmetic);
     }
 
     private Value Compare(BinarySyntax b, BinaryOperator op, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
@@ -159,15 +178,28 @@ internal sealed partial class ExpressionEvaluator
         };
     }
 
+    /// <summary>A chain of <c>and</c> (or of <c>or</c>), evaluated flat so a long chain does not recurse.</summary>
     private Value Logical(BinarySyntax b, EvalFrame f)
     {
-        var left = Evaluate(b.Left, f);
-        if (left.IsUnknown) { Evaluate(b.Right, f); return Value.Unknown; }
-        if (left.Kind != ValueKind.Boolean) return TypeError(f, b.Left.Span, "true or false", left);
-        var right = Evaluate(b.Right, f);
-        if (right.IsUnknown) return Value.Unknown;
-        if (right.Kind != ValueKind.Boolean) return TypeError(f, b.Right.Span, "true or false", right);
-        return Value.Of(b.Operator == BinaryOperator.And ? left.Boolean && right.Boolean : left.Boolean || right.Boolean);
+        var operands = new List<ExpressionSyntax>();
+        ExpressionSyntax node = b;
+        while (node is BinarySyntax bin && bin.Operator == b.Operator)
+        {
+            operands.Add(bin.Right);
+            node = bin.Left;
+        }
+        operands.Add(node);
+        operands.Reverse();
+        bool unknown = false;
+        bool result = b.Operator == BinaryOperator.And;
+        foreach (var operand in operands)
+        {
+            var v = Evaluate(operand, f);
+            if (v.IsUnknown) { unknown = true; continue; }
+            if (v.Kind != ValueKind.Boolean) return TypeError(f, operand.Span, "true or false", v);
+            result = b.Operator == BinaryOperator.And ? result && v.Boolean : result || v.Boolean;
+        }
+        return unknown ? Value.Unknown : Value.Of(result);
     }
 
     private Value Power(BinarySyntax b, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
@@ -183,6 +215,10 @@ internal sealed partial class ExpressionEvaluator
         {
             result = Dimension.None;
         }
+        else if (Rational.TryFrom(exponent, out int pp, out int qq) && !dim.CanPow(pp, qq))
+        {
+            return Error(f, DiagnosticCodes.LimitExceeded, b.Span, DiagnosticMessages.LimitExceeded(DiagnosticMessages.ExponentLimit(Dimension.MaxExponent)));
+        }
         else if (!Rational.TryFrom(exponent, out int p, out int q) || !dim.TryPow(p, q, out result))
         {
             return Error(f, DiagnosticCodes.NonIntegerExponent, b.Span,
@@ -196,7 +232,7 @@ internal sealed partial class ExpressionEvaluator
         }
         double v = Math.Pow(left.Quantity.Si, exponent);
         if (double.IsNaN(v) && left.Quantity.Si < 0)
-            return Error(f, DiagnosticCodes.DomainError, b.Span, DiagnosticMessages.DomainError("power", "a negative number to a fractional power has no real value"));
+            return Error(f, DiagnosticCodes.DomainError, b.Span, DiagnosticMessages.DomainError("power", DiagnosticMessages.NegativeFractionalPower));
         return Finite(f, b.Span, v) ? Value.Of(new Quantity(v, result, resultTag)) : Value.Unknown;
     }
 

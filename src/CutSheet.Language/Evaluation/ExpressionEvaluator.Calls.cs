@@ -85,13 +85,20 @@ internal sealed partial class ExpressionEvaluator
             bound[index] = a;
         }
 
+        if (f.RecordDependencies && ReferenceEquals(fn.Home, _top) && fn.ReadsSheetDefinitions) f.DependsOnSheet = true;
+        if (!fn.IsValid)
+        {
+            // Its declaration is reported; evaluate the arguments for their own diagnostics and stop.
+            foreach (var a in call.Arguments) Evaluate(a.Value, f);
+            return Value.Unknown;
+        }
         var locals = new Dictionary<string, Value>(StringComparer.Ordinal);
         bool foreign = f.Foreign || !ReferenceEquals(fn.Home, _top);
         var callSite = f.Foreign ? f.CallSite : call.Span;
         var bodyFrame = new EvalFrame
         {
             Scope = fn.Home, Locals = locals, Depth = f.Depth + 1, CheckOnly = f.CheckOnly, CallSite = callSite,
-            Foreign = foreign, Function = fn, MentionsPi = PiScanner.Mentions(fn),
+            Foreign = foreign, Function = fn,
         };
         bool unknown = false;
         for (int i = 0; i < fn.Parameters.Count; i++)
@@ -204,6 +211,40 @@ internal sealed partial class ExpressionEvaluator
     }
 
     /// <summary>
+    /// What a counted or angular factor of an argument says against its parameter, or null when
+    /// nothing: a plain value where a per-revolution (per-tooth…) one is expected is the
+    /// lead-for-pitch trap; two different counts disagree; an angle dropped or supplied between a
+    /// frequency and an angular velocity hides 2π. A count or angle left over in a product
+    /// (2·π·n·T, π·D·n) is dimension one and passes.
+    /// </summary>
+    private static string? CountMismatch(Dimension have, Dimension want)
+    {
+        bool frequency = have.SiEquals(Dimension.FromSi(0, 0, -1));
+        for (int i = Dimension.SiCount; i < Dimension.Count; i++)
+        {
+            int h = have[i], w = want[i];
+            if (h == w) continue;
+            string name = Dimension.SoftName(i);
+            if (i == Dimension.Angle)
+            {
+                if (frequency) return h == 0 ? "a plain frequency where an angle per time is expected (ω = 2π·f)" : "an angle per time where a plain frequency is expected";
+                if (h == 0 && w > 0 && have.IsNone) return "a plain number where an angle is expected is read as radians; write deg or rad";
+                continue;
+            }
+            if (w < 0 && h == 0) return $"a plain value where a value per {name} is expected (a pitch is not a lead on a multi-start screw)";
+            if (h != 0 && w != 0) return $"a value counted in {name}{Units.Superscript.Of(h)} where {name}{Units.Superscript.Of(w)} is expected";
+            if (h < 0 && w == 0 && HasOtherCount(want, i)) return $"a value per {name} where another count is expected";
+        }
+        return null;
+    }
+
+    private static bool HasOtherCount(Dimension d, int except)
+    {
+        for (int i = Dimension.SiCount; i < Dimension.Count; i++) if (i != except && i != Dimension.Angle && d[i] != 0) return true;
+        return false;
+    }
+
+    /// <summary>
     /// Checks an argument against its parameter's declared kind and gives the function the value
     /// in that kind. Dimensions must agree; revolutions against radians is an error; a plain
     /// value where a per-revolution (or per-tooth…) quantity is expected is a warning (the
@@ -221,7 +262,7 @@ internal sealed partial class ExpressionEvaluator
             if (v.Kind == ValueKind.Quantity) return Value.Of(new QuantityList([v.Quantity.Si], v.Quantity.Dimension, v.Quantity.Tag));
             return v.Kind == ValueKind.List ? v : TypeError(f, syntax.Span, $"a list for '{p.Name}'", v);
         }
-        var kind = p.Kind!;
+        if (p.Kind is not { } kind) return Value.Unknown;
         if (v.Kind != ValueKind.Quantity) return TypeError(f, syntax.Span, $"{kind.Description} for '{p.Name}'", v);
         var q = v.Quantity;
         var d = q.Dimension;
@@ -236,20 +277,18 @@ internal sealed partial class ExpressionEvaluator
         {
             return Error(f, DiagnosticCodes.ArgumentRotation, syntax.Span, DiagnosticMessages.ArgumentRotation(name, p.Name, kind, Label(syntax, q, f)));
         }
-        for (int i = Dimension.SiCount; i < Dimension.Count; i++)
+        if (CountMismatch(d, k) is { } what)
         {
-            int have = d[i], want = k[i];
-            if (have == want) continue;
-            bool silentInsert = have == 0 && want > 0 && i != Dimension.Angle;
-            if (!silentInsert)
-            {
-                Warn(f, DiagnosticCodes.ArgumentCount, syntax.Span, DiagnosticMessages.ArgumentCount(name, p.Name, kind, Label(syntax, q, f), d));
-                break;
-            }
+            Warn(f, DiagnosticCodes.ArgumentCount, syntax.Span, DiagnosticMessages.ArgumentCount(name, p.Name, kind, Label(syntax, q, f), what));
         }
         if (kind.IsTagged && q.Tag is not null && q.Tag != kind)
         {
-            return Error(f, DiagnosticCodes.ArgumentKind, syntax.Span, DiagnosticMessages.ArgumentKind(name, p.Name, kind, q.Tag));
+            // Declared kinds of one dimension (a drive efficiency for a back-drive one) are a caution:
+            // the number may be close, but it answers another question.
+            if (kind.Basis is null && q.Tag.Basis is null)
+                return Error(f, DiagnosticCodes.ArgumentKind, syntax.Span, DiagnosticMessages.ArgumentKind(name, p.Name, kind, q.Tag));
+            if (!f.CheckOnly && !f.Foreign)
+                Fire(CautionLevel.Caution, DiagnosticMessages.DeclaredKindMismatch(name, p.Name, kind, q.Tag), syntax.Span, null, DiagnosticCodes.ArgumentKind);
         }
         return Value.Of(new Quantity(q.Si * factor, k, kind.IsTagged ? kind : null));
     }

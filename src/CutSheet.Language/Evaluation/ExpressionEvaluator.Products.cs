@@ -14,6 +14,15 @@ internal sealed partial class ExpressionEvaluator
     /// </summary>
     private Value Product(BinarySyntax root, EvalFrame f)
     {
+        if (root.Left is not BinarySyntax { Operator: BinaryOperator.Multiply or BinaryOperator.Divide }
+            && !IsPi(root.Left) && !IsPi(root.Right))
+        {
+            // The common case, a * b or a / b: no list to build unless rotation needs a look.
+            var l = Evaluate(root.Left, f);
+            var r = Evaluate(root.Right, f);
+            if (l.IsUnknown || r.IsUnknown) return Value.Unknown;
+            if (!HasRotation(l) && !HasRotation(r)) return MultiplyPair(root, l, r, f);
+        }
         var operands = new List<(bool Divide, ExpressionSyntax Syntax)>();
         ExpressionSyntax node = root;
         while (node is BinarySyntax { Operator: BinaryOperator.Multiply or BinaryOperator.Divide } bin)
@@ -26,34 +35,30 @@ internal sealed partial class ExpressionEvaluator
 
         var values = new Value[operands.Count];
         bool unknown = false;
-        for (int i = 0; i < operands.Count; i++)
+        bool chainHasPi = operands.Exists(o => IsPi(o.Syntax));
+        // A π in this product covers the products nested in it: 2 * pi * (n * T) carries its 2π.
+        if (chainHasPi) _piProducts++;
+        try
         {
-            values[i] = Evaluate(operands[i].Syntax, f);
-            if (values[i].IsUnknown) unknown = true;
+            for (int i = 0; i < operands.Count; i++)
+            {
+                values[i] = Evaluate(operands[i].Syntax, f);
+                if (values[i].IsUnknown) unknown = true;
+            }
+        }
+        finally
+        {
+            if (chainHasPi) _piProducts--;
         }
         if (unknown) return Value.Unknown;
 
         var acc = values[0];
-        if (acc.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, operands[0].Syntax.Span, "a quantity", acc);
         for (int i = 1; i < values.Length; i++)
         {
-            var v = values[i];
-            if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, operands[i].Syntax.Span, "a quantity", v);
-            var (ad, at) = DimensionOf(acc);
-            var (vd, vt) = DimensionOf(v);
-            bool divide = operands[i].Divide;
-            var dim = divide ? ad / vd : ad * vd;
-            // A plain number keeps the other side's kind (T / eta is still a torque).
-            Kind? tag = vd.IsNone ? at : ad.IsNone && !divide ? vt : null;
-            if (divide && !f.CheckOnly)
-            {
-                bool zero = v.Kind == ValueKind.Quantity ? v.Quantity.Si == 0 : v.List!.Values.Contains(0);
-                if (zero) return Error(f, DiagnosticCodes.DivisionByZero, operands[i].Syntax.Span, DiagnosticMessages.DivisionByZero);
-            }
-            acc = Elementwise(f, root.Span, acc, v, divide ? (x, y) => x / y : (x, y) => x * y, dim, tag);
+            acc = Multiply(root, acc, operands[i - 1].Syntax, values[i], operands[i].Syntax, operands[i].Divide, f);
             if (acc.IsUnknown) return acc;
         }
-        if (!f.CheckOnly) RotationTraps(root, operands, values, acc, f);
+        if (!f.CheckOnly && !chainHasPi && _piProducts == 0) RotationTraps(root, operands, values, acc, f);
         return PiTurnsRevolutionsIntoRadians(operands, acc);
     }
 
@@ -68,7 +73,8 @@ internal sealed partial class ExpressionEvaluator
         int up = 0, down = 0;
         foreach (var (divide, syntax) in operands)
         {
-            if (syntax is NameSyntax { Qualifier: null, Name: "pi" or "π" }) { if (divide) down++; else up++; }
+            var (n, d) = PiFactors(syntax);
+            if (divide) { up += d; down += n; } else { up += n; down += d; }
         }
         if (up == 0 && down == 0) return acc;
         var (dim, tag) = DimensionOf(acc);
@@ -91,6 +97,67 @@ internal sealed partial class ExpressionEvaluator
         return acc.Kind == ValueKind.List ? Value.Of(acc.List! with { Dimension = moved }) : Value.Of(new Quantity(acc.Quantity.Si, moved, tag));
     }
 
+    private Value MultiplyPair(BinarySyntax root, Value l, Value r, EvalFrame f) =>
+        Multiply(root, l, root.Left, r, root.Right, root.Operator == BinaryOperator.Divide, f);
+
+    private Value Multiply(BinarySyntax root, Value acc, ExpressionSyntax accSyntax, Value v, ExpressionSyntax vSyntax, bool divide, EvalFrame f)
+    {
+        WarnOffsetScale(accSyntax, f);
+        WarnOffsetScale(vSyntax, f);
+        if (acc.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, accSyntax.Span, "a quantity", acc);
+        if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, vSyntax.Span, "a quantity", v);
+        var (ad, at) = DimensionOf(acc);
+        var (vd, vt) = DimensionOf(v);
+        if (!Dimension.CanCombine(ad, vd, divide ? -1 : 1))
+            return Error(f, DiagnosticCodes.LimitExceeded, root.Span, DiagnosticMessages.LimitExceeded(DiagnosticMessages.ExponentLimit(Dimension.MaxExponent)));
+        var dim = divide ? ad / vd : ad * vd;
+        // A plain number keeps the other side's kind (T / eta is still a torque).
+        Kind? tag = vd.IsNone ? at : ad.IsNone && !divide ? vt : null;
+        if (divide && !f.CheckOnly)
+        {
+            bool zero = v.Kind == ValueKind.Quantity ? v.Quantity.Si == 0 : v.List!.Values.Contains(0);
+            if (zero) return Error(f, DiagnosticCodes.DivisionByZero, vSyntax.Span, DiagnosticMessages.DivisionByZero);
+        }
+        if (acc.Kind == ValueKind.Quantity && v.Kind == ValueKind.Quantity)
+        {
+            double x = divide ? acc.Quantity.Si / v.Quantity.Si : acc.Quantity.Si * v.Quantity.Si;
+            return Finite(f, root.Span, x) ? Value.Of(new Quantity(x, dim, tag)) : Value.Unknown;
+        }
+        return Elementwise(f, root.Span, acc, v, divide ? static (x, y) => x / y : static (x, y) => x * y, dim, tag);
+    }
+
+    /// <summary>The π factors of a product written in brackets, (2 * pi * eta): in its numerator and its denominator.</summary>
+    private static (int Up, int Down) PiFactors(ExpressionSyntax e)
+    {
+        switch (e)
+        {
+            case NameSyntax { Qualifier: null, Name: "pi" or "π" }:
+                return (1, 0);
+            case BinarySyntax { Operator: BinaryOperator.Multiply } m:
+            {
+                var (a, b) = PiFactors(m.Left);
+                var (c, d) = PiFactors(m.Right);
+                return (a + c, b + d);
+            }
+            case BinarySyntax { Operator: BinaryOperator.Divide } q:
+            {
+                var (a, b) = PiFactors(q.Left);
+                var (c, d) = PiFactors(q.Right);
+                return (a + d, b + c);
+            }
+            default:
+                return (0, 0);
+        }
+    }
+
+    private static bool IsPi(ExpressionSyntax e) => e is NameSyntax { Qualifier: null, Name: "pi" or "π" };
+
+    private static bool HasRotation(Value v)
+    {
+        var (d, _) = DimensionOf(v);
+        return d[Dimension.Rev] != 0 || d[Dimension.Angle] != 0;
+    }
+
     private void RotationTraps(BinarySyntax root, List<(bool Divide, ExpressionSyntax Syntax)> operands, Value[] values, Value result, EvalFrame f)
     {
         bool anyRotation = false;
@@ -110,25 +177,34 @@ internal sealed partial class ExpressionEvaluator
             if (operands[i].Divide) continue;
             if (d.SiEquals(torqueDim) && tag != Kinds.Energy) torque = true;
             if (d[Dimension.Rev] > 0 && d[Dimension.Time] < 0) rotational = true;
-            if (d.SiEquals(Dimension.FromSi(1, 0, 0)) && d[Dimension.Rev] == 0) length = true;
-            if (d.IsNone && operands[i].Syntax is NameSyntax) namedNumber = true;
+            if (d == Dimension.FromSi(1, 0, 0)) length = true;
+            // A count of teeth or starts (or a plain number with a name) makes this a feed, f_z · z · n, not a surface speed.
+            if (d.IsDimensionless && d[Dimension.Rev] == 0 && d[Dimension.Angle] == 0 && (d.HasSoft || operands[i].Syntax is NameSyntax)) namedNumber = true;
             if (d[Dimension.Rev] < 0) perRev = i;
             if (d[Dimension.Angle] > 0) angle = i;
         }
-        if (rotational && rd[Dimension.Rev] > 0 && (torque || length) && !f.MentionsPi)
+        if (rotational && rd[Dimension.Rev] > 0 && (torque || length))
         {
-            var insert2Pi = new Fix("multiply by 2 * pi", [new TextEdit(new TextSpan(root.Span.Start, 0), "2 * pi * ")]);
+            var at = new TextSpan(root.Span.Start, 0);
+            var twoPi = new Fix("multiply by 2 * pi", [new TextEdit(at, "2 * pi * ")]);
             if (torque)
-                Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, insert2Pi);
+            {
+                Warn(f, DiagnosticCodes.TorqueTimesRpm, root.Span, DiagnosticMessages.TorqueTimesRpm, [twoPi]);
+            }
             else if (rd.SiEquals(Dimension.FromSi(1, 0, -1)) && !namedNumber)
-                Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, insert2Pi);
+            {
+                // v = π·D·n for a diameter, 2π·r·n for a radius: offer both, the likelier first.
+                var pi = new Fix("multiply by pi (the length is a diameter)", [new TextEdit(at, "pi * ")]);
+                bool halved = operands.Exists(o => o.Divide && o.Syntax is QuantityLiteralSyntax { Number: 2, Unit: null });
+                Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, halved ? [twoPi, pi] : [pi, twoPi]);
+            }
         }
         if (perRev >= 0 && angle >= 0)
         {
             var s = operands[angle].Syntax;
             string text = f.Foreign ? "" : _source.Slice(s.Span);
             var fix = new Fix("convert the angle to revolutions", [new TextEdit(s.Span, $"({text} as rev)")]);
-            Warn(f, DiagnosticCodes.PerRevTimesAngle, root.Span, DiagnosticMessages.PerRevTimesAngle, fix);
+            Warn(f, DiagnosticCodes.PerRevTimesAngle, root.Span, DiagnosticMessages.PerRevTimesAngle, [fix]);
         }
     }
 

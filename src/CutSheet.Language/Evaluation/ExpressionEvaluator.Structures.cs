@@ -14,7 +14,7 @@ internal sealed partial class ExpressionEvaluator
         var checkFrame = new EvalFrame
         {
             Scope = f.Scope, Locals = f.Locals, Depth = f.Depth, CheckOnly = true, CallSite = f.CallSite, Foreign = f.Foreign,
-            Function = f.Function, Formula = f.Formula, RecordDependencies = f.RecordDependencies,
+            Function = f.Function, RecordDependencies = f.RecordDependencies,
         };
         bool known = !condition.IsUnknown;
         var a = Evaluate(c.Then, known && condition.Boolean ? f : checkFrame);
@@ -58,6 +58,11 @@ internal sealed partial class ExpressionEvaluator
                 return Error(f, DiagnosticCodes.DimensionMismatch, l.Items[i].Span,
                     DiagnosticMessages.DimensionMismatch("list together", Label(l.Items[0], new Quantity(values[0], dim, tag), f), dim, Label(l.Items[i], v.Quantity, f), v.Quantity.Dimension));
             }
+            else if (tag is not null && v.Quantity.Tag is not null && tag != v.Quantity.Tag)
+            {
+                return Error(f, DiagnosticCodes.KindMismatch, l.Items[i].Span, DiagnosticMessages.KindMismatch("list together", tag.Name, v.Quantity.Tag.Name));
+            }
+            tag ??= v.Quantity.Tag;
             values[i] = v.Quantity.Si;
         }
         return unknown ? Value.Unknown : Value.Of(new QuantityList(values, dim, tag));
@@ -78,7 +83,7 @@ internal sealed partial class ExpressionEvaluator
         if (key.Kind != ValueKind.Choice || (table.Key is not null && key.Choice!.Type != table.Key))
             return TypeError(f, l.Key.Span, $"an option of {table.Key?.Name ?? "the table's choice"}", key);
         if (!table.Rows.TryGetValue(key.Choice!.Name, out var row) || !row.Cells.TryGetValue(l.Column, out var cell))
-            return Error(f, DiagnosticCodes.MissingRow, l.Span, DiagnosticMessages.MissingRow(table.Name, key.Choice!.Name + "." + l.Column));
+            return f.CheckOnly ? Value.Unknown : Error(f, DiagnosticCodes.MissingRow, l.Span, DiagnosticMessages.MissingRow(table.Name, key.Choice!.Name + "." + l.Column));
         return cell.Typical;
     }
 }

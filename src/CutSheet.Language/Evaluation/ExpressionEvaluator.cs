@@ -19,6 +19,9 @@ internal sealed partial class ExpressionEvaluator
     private readonly SheetScope _top;
     private readonly Func<int> _currentLine;
     private readonly UnitSystem _system;
+
+    /// <summary>How many products that contain π are being evaluated around the current one.</summary>
+    private int _piProducts;
     private readonly SourceText _source;
     private readonly Func<DefinitionSymbol, int> _lastDependencyLine;
 
@@ -52,17 +55,20 @@ internal sealed partial class ExpressionEvaluator
     private Value Error(EvalFrame f, string code, TextSpan span, string message, Fix? fix = null, IReadOnlyList<RelatedLocation>? related = null)
     {
         if (f.CheckOnly && !code.StartsWith("CUT2", StringComparison.Ordinal) && !code.StartsWith("CUT3", StringComparison.Ordinal)) return Value.Unknown;
-        Report(f, code, Severity.Error, span, message, fix, related);
+        Report(f, code, Severity.Error, span, message, fix is null ? [] : [fix], related);
         return Value.Unknown;
     }
 
-    private void Warn(EvalFrame f, string code, TextSpan span, string message, Fix? fix = null, Severity severity = Severity.Warning)
+    private void Warn(EvalFrame f, string code, TextSpan span, string message, Fix? fix = null, Severity severity = Severity.Warning) =>
+        Warn(f, code, span, message, fix is null ? [] : [fix], severity);
+
+    private void Warn(EvalFrame f, string code, TextSpan span, string message, IReadOnlyList<Fix> fixes, Severity severity = Severity.Warning)
     {
         if (f.CheckOnly && !code.StartsWith("CUT2", StringComparison.Ordinal)) return;
-        Report(f, code, severity, span, message, fix, null);
+        Report(f, code, severity, span, message, fixes, null);
     }
 
-    private void Report(EvalFrame f, string code, Severity severity, TextSpan span, string message, Fix? fix, IReadOnlyList<RelatedLocation>? related)
+    private void Report(EvalFrame f, string code, Severity severity, TextSpan span, string message, IReadOnlyList<Fix> fixes, IReadOnlyList<RelatedLocation>? related)
     {
         if (f.Foreign)
         {
@@ -73,7 +79,7 @@ internal sealed partial class ExpressionEvaluator
                 [where, .. related ?? []], []));
             return;
         }
-        _sink.Report(new Diagnostic(code, severity, span, message, related ?? [], fix is null ? [] : [fix]));
+        _sink.Report(new Diagnostic(code, severity, span, message, related ?? [], fixes));
     }
 
     // ----- literals and names -----

@@ -8,6 +8,9 @@ namespace CutSheet.Language.Evaluation;
 
 internal sealed partial class SheetEvaluator
 {
+    /// <summary>The line where each of the sheet's own names was first declared.</summary>
+    private readonly Dictionary<string, int> _declaredAt = new(StringComparer.Ordinal);
+
     /// <summary>Declares the sheet's own names; a name is declared once, and never over an import or a constant.</summary>
     private void Declare()
     {
@@ -41,21 +44,25 @@ internal sealed partial class SheetEvaluator
                     if (CanDeclare(t.Name, t.NameSpan))
                         _scope.Tables[t.Name] = new TableSymbol(t, null, _source.Path);
                     break;
+                case KindDeclarationSyntax k:
+                    var basis = Kinds.Find(k.Base);
+                    if (basis is null || basis.Basis is not null)
+                    {
+                        var candidates = Kinds.Builtin.Select(b => b.Name).Concat(Kinds.Aliases.Keys);
+                        _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, k.BaseSpan, DiagnosticMessages.UnknownKind(k.Base, ExpressionEvaluator.Suggest(k.Base, candidates))));
+                        break;
+                    }
+                    if (CanDeclare(k.Name, k.NameSpan))
+                        _scope.Kinds[k.Name] = new Kind(k.Name, basis.Dimension, k.Clauses.Description?.Value ?? $"{k.Name.Replace('_', ' ')} (a {basis.Name.Replace('_', ' ')})", isTagged: true, basis: basis);
+                    break;
             }
         }
     }
 
     private bool CanDeclare(string name, TextSpan span)
     {
-        if (_scope.FindOwn(name) is { } existing)
+        if (_declaredAt.TryGetValue(name, out int firstLine))
         {
-            int firstLine = existing switch
-            {
-                DefinitionSymbol d => d.Line,
-                FunctionSymbol f => f.Line,
-                TableSymbol t => LineOf(t.Syntax.Span),
-                _ => LineOf(span),
-            };
             _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.Redefinition(name, firstLine + 1)));
             return false;
         }
@@ -66,9 +73,10 @@ internal sealed partial class SheetEvaluator
         }
         if (Builtins.Constants.ContainsKey(name) || Builtins.IsFunction(name))
         {
-            _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.Redefinition(name, 0).Replace("on line 0", "as a built-in")));
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.RedefinitionOfBuiltin(name)));
             return false;
         }
+        _declaredAt[name] = LineOf(span);
         return true;
     }
 
@@ -103,10 +111,13 @@ internal sealed partial class SheetEvaluator
                 ?? (_scope.Imported.TryGetValue(t.KeyChoice, out var imp) ? imp.Symbol as ChoiceType : null);
             if (key is null)
             {
-                _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, t.KeyChoiceSpan, DiagnosticMessages.UnknownKind(t.KeyChoice,
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, t.KeyChoiceSpan, DiagnosticMessages.UnknownChoice(t.KeyChoice,
                     ExpressionEvaluator.Suggest(t.KeyChoice, _scope.Choices.Keys))));
             }
-            _scope.Tables[t.Name] = new TableSymbol(t, key, _source.Path);
+            var declared = new TableSymbol(t, key, _source.Path);
+            // Columns are known from the text, so a function can look a table up before its rows are evaluated.
+            foreach (var row in t.Clauses.Rows) foreach (var cell in row.Cells) declared.Columns.Add(cell.Column);
+            _scope.Tables[t.Name] = declared;
         }
     }
 
@@ -114,11 +125,12 @@ internal sealed partial class SheetEvaluator
     {
         if (name == "list") return (null, null, true, false);
         if (name == "boolean") return (null, null, false, true);
-        var kind = Kinds.Find(name);
+        var kind = Kinds.Find(name) ?? _scope.Kinds.GetValueOrDefault(name)
+            ?? (_scope.Imported.TryGetValue(name, out var importedKind) ? importedKind.Symbol as Kind : null);
         if (kind is not null) return (kind, null, false, false);
         if (_scope.Choices.TryGetValue(name, out var choice)) return (null, choice, false, false);
         if (_scope.Imported.TryGetValue(name, out var imported) && imported.Symbol is ChoiceType ic) return (null, ic, false, false);
-        var candidates = Kinds.Builtin.Select(k => k.Name).Concat(Kinds.Aliases.Keys).Concat(_scope.Choices.Keys).Append("list").Append("boolean");
+        var candidates = Kinds.Builtin.Select(k => k.Name).Concat(Kinds.Aliases.Keys).Concat(_scope.Choices.Keys).Concat(_scope.Kinds.Keys).Append("list").Append("boolean");
         _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, span, DiagnosticMessages.UnknownKind(name, ExpressionEvaluator.Suggest(name, candidates))));
         return (null, null, false, false);
     }
@@ -130,11 +142,21 @@ internal sealed partial class SheetEvaluator
         foreach (var fn in _scope.Functions.Values)
         {
             var names = new HashSet<string>(StringComparer.Ordinal);
+            var parameters = fn.Syntax.Parameters.Select(p => p.Name).Concat(fn.Syntax.Clauses.Locals.Select(l => l.Name)).ToHashSet(StringComparer.Ordinal);
             foreach (var e in BodyExpressions(fn.Syntax))
             {
-                foreach (var n in NameCollector.Names(e)) if (_scope.Functions.ContainsKey(n)) names.Add(n);
+                foreach (var n in NameCollector.Names(e))
+                {
+                    if (_scope.Functions.ContainsKey(n)) names.Add(n);
+                    if (!parameters.Contains(n) && _scope.Definitions.ContainsKey(n)) fn.ReadsSheetDefinitions = true;
+                }
             }
             calls[fn.Name] = names;
+        }
+        foreach (var fn in _scope.Functions.Values)
+        {
+            // A function that calls one reading the sheet reads it too.
+            if (!fn.ReadsSheetDefinitions && Reachable(calls, fn.Name).Any(n => _scope.Functions[n].ReadsSheetDefinitions)) fn.ReadsSheetDefinitions = true;
         }
         foreach (var fn in _scope.Functions.Values)
         {
@@ -151,6 +173,19 @@ internal sealed partial class SheetEvaluator
                 }
                 if (seen.Add(next)) foreach (var c in calls[next]) stack.Push(c);
             }
+        }
+    }
+
+    private static IEnumerable<string> Reachable(Dictionary<string, HashSet<string>> calls, string from)
+    {
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        var stack = new Stack<string>(calls[from]);
+        while (stack.Count > 0)
+        {
+            var next = stack.Pop();
+            if (!seen.Add(next)) continue;
+            yield return next;
+            foreach (var c in calls[next]) stack.Push(c);
         }
     }
 
@@ -182,7 +217,7 @@ internal sealed partial class SheetEvaluator
                     _ => Value.Unknown,
                 };
             }
-            var frame = new EvalFrame { Scope = _scope, Locals = locals, CheckOnly = true, Function = fn, CallSite = fn.Syntax.Span, MentionsPi = PiScanner.Mentions(fn) };
+            var frame = new EvalFrame { Scope = _scope, Locals = locals, CheckOnly = true, Function = fn, CallSite = fn.Syntax.Span };
             int before = _sink.Diagnostics.Count(d => d.Severity == Severity.Error);
             _currentLine = fn.Line;
             _eval.InvokeBody(fn, fn.Name, null, frame, frame);

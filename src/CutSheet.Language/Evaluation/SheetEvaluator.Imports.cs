@@ -30,7 +30,7 @@ internal sealed partial class SheetEvaluator
                 {
                     var suggestion = ExpressionEvaluator.Suggest(use.Target, LibrarySheets.Names);
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan,
-                        DiagnosticMessages.ImportNotFound(use.Target) + (suggestion is null ? $"; library sheets: {string.Join(", ", LibrarySheets.Names)}" : $"; did you mean {suggestion}?")));
+                        DiagnosticMessages.LibraryNotFound(use.Target, suggestion, LibrarySheets.Names)));
                     continue;
                 }
                 _importNames.Add($"{use.Target} (library {LibrarySheets.Version})");
@@ -80,9 +80,13 @@ internal sealed partial class SheetEvaluator
             int errors = result.Diagnostics.Count(d => d.Severity == Severity.Error);
             if (errors > 0)
             {
+                // Point at the cause: through imports of imports, down to the first real error.
                 var first = result.Diagnostics.First(d => d.Severity == Severity.Error);
-                _sink.Report(new Diagnostic(DiagnosticCodes.ImportHasErrors, Severity.Error, use.TargetSpan, DiagnosticMessages.ImportHasErrors(label, errors),
-                    [new RelatedLocation(first.Span, first.Message, first.Path ?? path)], []));
+                var cause = first.Code == DiagnosticCodes.ImportHasErrors && first.Related.Count > 0
+                    ? first.Related[0]
+                    : new RelatedLocation(first.Span, first.Message, first.Path ?? path);
+                _sink.Report(new Diagnostic(DiagnosticCodes.ImportHasErrors, Severity.Error, use.TargetSpan,
+                    DiagnosticMessages.ImportHasErrors(label, errors) + "; first: " + cause.Message, [cause], []));
             }
             foreach (var o in use.Overrides)
             {

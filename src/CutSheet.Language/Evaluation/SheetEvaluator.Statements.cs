@@ -46,7 +46,7 @@ internal sealed partial class SheetEvaluator
         var accepted = statement.Clauses.Accepted;
         if (_sink.Cautions.Count == 0)
         {
-            if (accepted is not null)
+            if (accepted is not null && statement is DefinitionSyntax or CheckSyntax or CautionSyntax)
                 _sink.Report(Diagnostic.Warning(DiagnosticCodes.NothingToAccept, accepted.Span, DiagnosticMessages.NothingToAccept));
             return [];
         }
@@ -71,6 +71,7 @@ internal sealed partial class SheetEvaluator
             CautionSyntax => ["source", "accepted"],
             TableSyntax => ["source", "row"],
             ChoiceSyntax => ["source"],
+            KindDeclarationSyntax => ["source"],
             _ => [],
         };
         foreach (var (keyword, span) in statement.Clauses.Keywords)
@@ -84,6 +85,9 @@ internal sealed partial class SheetEvaluator
                     CheckSyntax => "a check",
                     CautionSyntax => "a caution",
                     TableSyntax => "a table",
+                    ChoiceSyntax => "a choice",
+                    KindDeclarationSyntax => "a kind declaration",
+                    UseSyntax => "an import",
                     _ => "this statement",
                 };
                 _sink.Report(Diagnostic.Error(DiagnosticCodes.ClauseNotAllowed, span, DiagnosticMessages.ClauseNotAllowed(keyword, what)));
@@ -115,6 +119,7 @@ internal sealed partial class SheetEvaluator
     {
         if (!_scope.Tables.TryGetValue(t.Name, out var table) || table.Syntax != t) return new OtherStatementResult(t, line);
         var frame = new EvalFrame { Scope = _scope, CallSite = t.Span };
+        var rowLines = new Dictionary<string, int>(StringComparer.Ordinal);
         foreach (var row in t.Clauses.Rows)
         {
             if (table.Key is not null && !table.Key.Options.Exists(o => o.Name == row.Key))
@@ -122,11 +127,12 @@ internal sealed partial class SheetEvaluator
                 _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownChoiceValue, row.KeySpan, DiagnosticMessages.UnknownChoiceValue(row.Key, table.Key.Name)));
                 continue;
             }
-            if (table.Rows.ContainsKey(row.Key))
+            if (rowLines.TryGetValue(row.Key, out int firstRow))
             {
-                _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, row.KeySpan, DiagnosticMessages.Redefinition(row.Key, LineOf(row.Span) + 1)));
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, row.KeySpan, DiagnosticMessages.Redefinition(row.Key, firstRow + 1)));
                 continue;
             }
+            rowLines[row.Key] = LineOf(row.Span);
             var cells = new Dictionary<string, TableCell>(StringComparer.Ordinal);
             foreach (var cell in row.Cells)
             {
@@ -143,7 +149,7 @@ internal sealed partial class SheetEvaluator
 
     private StatementResult EvaluateCaution(CautionSyntax c, int line)
     {
-        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span, MentionsPi = true };
+        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span };
         var v = _eval.Evaluate(c.Condition, frame);
         bool? fired = null;
         if (v.Kind == ValueKind.Boolean)

@@ -14,7 +14,7 @@ internal sealed partial class SheetEvaluator
 
     private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
     {
-        var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, Formula = d.Value, RecordDependencies = true };
+        var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, RecordDependencies = true };
         var value = _eval.Evaluate(d.Value, frame);
         var clauses = d.Clauses;
         if (!_scope.Definitions.TryGetValue(d.Name, out var symbol) || symbol.Syntax != d)
@@ -51,7 +51,7 @@ internal sealed partial class SheetEvaluator
         {
             case ValueKind.Quantity:
                 var unit = overridden ? Presenter.UnitFor(o.Definition?.Value ?? d.Value, value.Quantity) : Presenter.UnitFor(d.Value, value.Quantity);
-                if (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension)) symbol.DisplayUnit = unit with { Dimension = value.Quantity.Dimension };
+                if (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension)) symbol.DisplayUnit = unit;
                 shown = Presenter.Present(value.Quantity, symbol.DisplayUnit ?? (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension) ? unit : null));
                 kind = value.Quantity.Kind?.Name ?? value.Quantity.Dimension.ToString();
                 break;
@@ -78,7 +78,7 @@ internal sealed partial class SheetEvaluator
         // The override's text is not the sheet's: evaluate it apart and report its problems at the definition it replaces.
         var sink = new DiagnosticSink();
         var evaluator = new ExpressionEvaluator(sink, _scope, syntax.Source, () => _currentLine, LastDependencyLine, _display.Units);
-        var value = evaluator.Evaluate(definition.Value, new EvalFrame { Scope = _scope, CallSite = target.Span, MentionsPi = true });
+        var value = evaluator.Evaluate(definition.Value, new EvalFrame { Scope = _scope, CallSite = target.Span });
         foreach (var d in sink.Diagnostics.Where(d => d.Severity == Severity.Error))
         {
             _sink.Report(Diagnostic.Error(d.Code, target.NameSpan, $"--set {target.Name}: {d.Message}"));
@@ -91,11 +91,11 @@ internal sealed partial class SheetEvaluator
         string? description = c.Clauses.Description?.Value;
         if (c.Condition is not BinarySyntax { Operator: BinaryOperator.LessEqual or BinaryOperator.Less or BinaryOperator.GreaterEqual or BinaryOperator.Greater or BinaryOperator.Equal or BinaryOperator.NotEqual } cmp)
         {
-            _eval.Evaluate(c.Condition, new EvalFrame { Scope = _scope, CallSite = c.Span, MentionsPi = true });
+            _eval.Evaluate(c.Condition, new EvalFrame { Scope = _scope, CallSite = c.Span });
             _sink.Report(Diagnostic.Error(DiagnosticCodes.NotAComparison, c.Condition.Span, DiagnosticMessages.NotAComparison));
             return new CheckResult(c, line, CheckStatus.NotEvaluated, "?", null, null, null, null, description, "not a comparison");
         }
-        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span, Formula = c.Condition };
+        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span };
         var outcome = _eval.Evaluate(c.Condition, frame);
         var left = _eval.Evaluate(cmp.Left, frame);
         var right = _eval.Evaluate(cmp.Right, frame);
@@ -125,7 +125,8 @@ internal sealed partial class SheetEvaluator
         int digits = _display.Digits;
         var shownValue = Presenter.Present(left.Quantity, valueUnit);
         var shownLimit = Presenter.Present(right.Quantity, limitUnit);
-        while (!semantics.Passed && shownValue.Text == shownLimit.Text && digits < 15)
+        bool equal = left.Quantity.Si == right.Quantity.Si;
+        while (!semantics.Passed && !equal && shownValue.Text == shownLimit.Text && digits < 15)
         {
             // A failing check never shows both sides equal: add figures until they differ.
             digits++;

@@ -64,7 +64,7 @@ internal sealed partial class SheetEvaluator
         var diagnostics = _syntax.Diagnostics.Concat(_sink.Diagnostics)
             .OrderBy(d => d.Path is null ? 0 : 1).ThenBy(d => d.Span.Start).ThenBy(d => d.Code, StringComparer.Ordinal)
             .ToArray();
-        return new SheetResult(_syntax, statements, diagnostics, _metadata, _display, _importNames);
+        return new SheetResult(_syntax, statements, diagnostics, _metadata, _display, _importNames, _scope);
     }
 
     private int LineOf(TextSpan span) => _source.GetPosition(span.Start).Line;
@@ -84,13 +84,16 @@ internal sealed partial class SheetEvaluator
     {
         var units = _options.Units;
         int? digits = _options.Digits;
+        var keyLines = new Dictionary<string, int>(StringComparer.Ordinal);
         foreach (var statement in _syntax.Statements)
         {
             switch (statement)
             {
                 case SheetMetadataSyntax m:
-                    if (_metadata.ContainsKey(m.Key))
-                        _sink.Report(Diagnostic.Warning(DiagnosticCodes.Redefinition, m.KeySpan, DiagnosticMessages.Redefinition("sheet " + m.Key, LineOf(statement.Span) + 1)));
+                    if (keyLines.TryGetValue(m.Key, out int first))
+                        _sink.Report(Diagnostic.Warning(DiagnosticCodes.Redefinition, m.KeySpan, DiagnosticMessages.Redefinition("sheet " + m.Key, first + 1)));
+                    else
+                        keyLines[m.Key] = LineOf(statement.Span);
                     _metadata[m.Key] = m.Value.Value;
                     break;
                 case DisplaySyntax d:

@@ -25,7 +25,7 @@ internal sealed class ValuePresenter(DisplaySettings settings, SheetScope scope)
                 return UnitCatalog.Default.Resolve(nu.Text).Unit;
             case QuantityLiteralSyntax:
                 return null;
-            case NameSyntax n when scope.Find(n.Name) is DefinitionSymbol { DisplayUnit: { } du } && du.Dimension == q.Dimension:
+            case NameSyntax n when scope.Find(n.Name) is DefinitionSymbol { DisplayUnit: { } du } && du.Dimension.SiEquals(q.Dimension):
                 return du;
         }
         return DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, settings.Units == UnitSystem.Inch ? UnitSystem.Inch : UnitSystem.Metric);
@@ -39,7 +39,8 @@ internal sealed class ValuePresenter(DisplaySettings settings, SheetScope scope)
         {
             // The other system: inch beside a metric unit, metric beside an inch unit.
             var other = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, DisplayUnits.IsInchUnit(unit.Text) ? UnitSystem.Metric : UnitSystem.Inch);
-            if (other is not null && other.Text != unit.Text)
+            bool sameInBoth = DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, UnitSystem.Metric)?.Text == DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, UnitSystem.Inch)?.Text;
+            if (other is not null && other.Text != unit.Text && !sameInBoth)
                 return new DisplayedValue(q, number, unit.Text, d, other.Text, ConvertForDisplay(q, other));
         }
         return new DisplayedValue(q, number, unit?.Text ?? "", d);

@@ -12,8 +12,9 @@ namespace CutSheet.Language.Results;
 public sealed class SheetResult
 {
     internal SheetResult(SheetSyntax syntax, IReadOnlyList<StatementResult> statements, IReadOnlyList<Diagnostic> diagnostics,
-        IReadOnlyDictionary<string, string> metadata, DisplaySettings display, IReadOnlyList<string> imports)
+        IReadOnlyDictionary<string, string> metadata, DisplaySettings display, IReadOnlyList<string> imports, Semantics.SheetScope scope)
     {
+        Scope = scope;
         Syntax = syntax;
         Statements = statements;
         Diagnostics = diagnostics;
@@ -23,6 +24,9 @@ public sealed class SheetResult
     }
 
     public SheetSyntax Syntax { get; }
+
+    /// <summary>The sheet's names after evaluation (definitions with their values, functions, imports), for editor features.</summary>
+    public Semantics.SheetScope Scope { get; }
 
     public string? Path => Syntax.Source.Path;
 

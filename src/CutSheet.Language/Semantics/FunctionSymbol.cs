@@ -17,6 +17,9 @@ public sealed class FunctionSymbol(FunctionSyntax syntax, SheetScope home, int l
     public bool ReturnsList { get; set; }
     public bool IsValid { get; set; } = true;
 
+    /// <summary>True when the function's formulas name a definition of its own sheet (so a call depends on the sheet).</summary>
+    public bool ReadsSheetDefinitions { get; set; }
+
     /// <summary>A one-line signature for hover, completion and docs.</summary>
     public string Signature =>
         $"{Name}({string.Join(", ", Syntax.Parameters.Select(p => $"{p.Name}: {p.KindName}"))}): {Syntax.ReturnKind}";

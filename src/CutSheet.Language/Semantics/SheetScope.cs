@@ -21,6 +21,7 @@ public sealed class SheetScope(string? path, string displayName)
     public Dictionary<string, ChoiceOption> Options { get; } = new(StringComparer.Ordinal);
     public Dictionary<string, TableSymbol> Tables { get; } = new(StringComparer.Ordinal);
     public Dictionary<string, SheetScope> Namespaces { get; } = new(StringComparer.Ordinal);
+    public Dictionary<string, Units.Kind> Kinds { get; } = new(StringComparer.Ordinal);
 
     /// <summary>Symbols brought in by unqualified imports, with the sheet each came from.</summary>
     public Dictionary<string, (object Symbol, SheetScope From)> Imported { get; } = new(StringComparer.Ordinal);
@@ -31,7 +32,8 @@ public sealed class SheetScope(string? path, string displayName)
         ?? Functions.GetValueOrDefault(name) as object
         ?? Options.GetValueOrDefault(name) as object
         ?? Tables.GetValueOrDefault(name) as object
-        ?? Choices.GetValueOrDefault(name);
+        ?? Choices.GetValueOrDefault(name) as object
+        ?? Kinds.GetValueOrDefault(name);
 
     /// <summary>A symbol visible in this sheet, own first, then unqualified imports.</summary>
     public object? Find(string name) => FindOwn(name) ?? (Imported.TryGetValue(name, out var i) ? i.Symbol : null);
@@ -43,5 +45,6 @@ public sealed class SheetScope(string? path, string displayName)
         foreach (var o in Options) yield return (o.Key, o.Value);
         foreach (var t in Tables) yield return (t.Key, t.Value);
         foreach (var c in Choices) yield return (c.Key, c.Value);
+        foreach (var k in Kinds) yield return (k.Key, k.Value);
     }
 }

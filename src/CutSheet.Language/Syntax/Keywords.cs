@@ -15,6 +15,7 @@ public static class Keywords
         ["valid"] = TokenKind.Valid, ["require"] = TokenKind.Require, ["where"] = TokenKind.Where,
         ["choice"] = TokenKind.Choice, ["table"] = TokenKind.Table, ["row"] = TokenKind.Row,
         ["from"] = TokenKind.From, ["to"] = TokenKind.To, ["true"] = TokenKind.True, ["false"] = TokenKind.False,
+        ["kind"] = TokenKind.KindKeyword,
     };
 
     public static IEnumerable<string> All => Map.Keys;

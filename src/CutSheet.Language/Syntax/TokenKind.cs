@@ -74,4 +74,5 @@ public enum TokenKind
     [Token(Category = "keyword", Example = "to")] To,
     [Token(Category = "keyword", Example = "true")] True,
     [Token(Category = "keyword", Example = "false")] False,
+    [Token(Category = "keyword", Example = "kind")] KindKeyword,
 }

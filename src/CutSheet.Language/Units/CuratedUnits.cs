@@ -38,6 +38,13 @@ internal static class CuratedUnits
         ["Volume.MegacubicFoot"] = "its symbol Mft³ reads as (Mft)³ but UnitsNet means 10⁶ ft³",
     };
 
+    /// <summary>Symbols UnitsNet offers that the language leaves out, with the reason.</summary>
+    public static readonly IReadOnlyDictionary<string, string> ExcludedSymbols = new Dictionary<string, string>
+    {
+        ["k"] = "a bare k would read as a kip; write kip (or kN) so a reader cannot mistake it for kilo",
+        ["r"] = "a bare r would read as a revolution measured as an angle (2π rad); write rev for a count of revolutions",
+    };
+
     /// <summary>
     /// Quantity order used to settle a symbol that names units of several quantities when no
     /// explicit choice below applies: the quantities a machining sheet uses most come first.
@@ -59,7 +66,6 @@ internal static class CuratedUnits
         ["g"] = ("Mass.Gram", "gram; gradian is gon"),
         ["t"] = ("Mass.Tonne", "metric tonne (1000 kg); short and long tons have their own symbols"),
         ["A"] = ("ElectricCurrent.Ampere", "ampere; ångström is Å"),
-        ["pt"] = ("Volume.UsPint", "US liquid pint; the typographic point is not a machining length"),
         ["lb"] = ("Mass.Pound", "a bare lb is the avoirdupois pound of mass; force is lbf"),
         ["oz"] = ("Mass.Ounce", "a bare oz is the ounce of mass; force is ozf"),
         ["s"] = ("Duration.Second", "second"),
@@ -219,6 +225,7 @@ internal static class CuratedUnits
 
         // Volumes and masses UnitsNet spells only with spaces ("gal (U.S.)", "t (short)").
         ("L", "litre (SI Brochure: L and l are both accepted)", 0.001, "m³", null),
+        ("mL", "millilitre", 1e-6, "m³", null),
         ("gal", "US liquid gallon (231 in³, NIST SP 811)", 231, "in³", null),
         ("ton", "short ton of mass (2000 lb), as GNU units reads it", 2000, "lb", null),
 

@@ -14,6 +14,9 @@ namespace CutSheet.Language.Units;
 public readonly struct Dimension : IEquatable<Dimension>
 {
     public const int Count = 14;
+
+    /// <summary>The largest exponent a dimension may reach; beyond it arithmetic is refused rather than wrapped.</summary>
+    public const int MaxExponent = 60;
     public const int SiCount = 7;
 
     public const int Length = 0, Mass = 1, Time = 2, Current = 3, Temperature = 4, Amount = 5, Luminosity = 6;
@@ -65,14 +68,34 @@ public readonly struct Dimension : IEquatable<Dimension>
         return new Dimension(e);
     }
 
-    /// <summary>Raises to p/q; false when an exponent would not stay an integer.</summary>
+    /// <summary>True when a·b (sign 1) or a/b (sign −1) keeps every exponent within ±<see cref="MaxExponent"/>.</summary>
+    public static bool CanCombine(Dimension a, Dimension b, int sign)
+    {
+        for (int k = 0; k < Count; k++)
+        {
+            if (Math.Abs(a._e[k] + sign * b._e[k]) > MaxExponent) return false;
+        }
+        return true;
+    }
+
+    /// <summary>True when raising to p/q keeps every exponent within ±<see cref="MaxExponent"/>.</summary>
+    public bool CanPow(int p, int q)
+    {
+        for (int k = 0; k < Count; k++)
+        {
+            if (Math.Abs((long)_e[k] * p) > (long)MaxExponent * Math.Abs(q)) return false;
+        }
+        return true;
+    }
+
+    /// <summary>Raises to p/q; false when an exponent would not stay an integer (check <see cref="CanPow"/> first).</summary>
     public bool TryPow(int p, int q, out Dimension result)
     {
         var e = new Exponents();
         for (int k = 0; k < Count; k++)
         {
             int v = _e[k] * p;
-            if (v % q != 0 || Math.Abs(v / q) > 100) { result = default; return false; }
+            if (v % q != 0 || Math.Abs(v / q) > MaxExponent) { result = default; return false; }
             e[k] = (sbyte)(v / q);
         }
         result = new Dimension(e);

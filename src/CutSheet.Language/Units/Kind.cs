@@ -9,8 +9,9 @@ namespace CutSheet.Language.Units;
 /// </summary>
 public sealed class Kind
 {
-    public Kind(string name, Dimension dimension, string description, bool isTagged = false, string? ambiguousWith = null)
+    public Kind(string name, Dimension dimension, string description, bool isTagged = false, string? ambiguousWith = null, Kind? basis = null)
     {
+        Basis = basis;
         Name = name;
         Dimension = dimension;
         Description = description;
@@ -25,6 +26,9 @@ public sealed class Kind
 
     /// <summary>A short phrase for messages and hover, e.g. "rotational frequency (revolutions per time, rpm)".</summary>
     public string Description { get; }
+
+    /// <summary>For a kind declared in a sheet (<c>kind NAME = BASE</c>), the built-in kind it refines; null for built-in kinds.</summary>
+    public Kind? Basis { get; }
 
     /// <summary>True for kinds that cannot be told from their dimension alone (torque, energy).</summary>
     public bool IsTagged { get; }

@@ -60,7 +60,7 @@ public sealed class UnitCatalog
             foreach (var raw in row.Abbreviations)
             {
                 string symbol = UnitText.Normalize(raw);
-                if (symbol.Length == 0 || symbol.Contains(' ')) continue;
+                if (symbol.Length == 0 || symbol.Contains(' ') || CuratedUnits.ExcludedSymbols.ContainsKey(symbol)) continue;
                 var def = new UnitDefinition(symbol, Humanize(row.Name), factor, row.Offset, dimension, tag, $"UnitsNet {row.Quantity}.{row.Name}");
                 if (!candidates.TryGetValue(symbol, out var list)) candidates[symbol] = list = [];
                 if (!list.Exists(c => c.Row.Quantity == row.Quantity && c.Row.Name == row.Name)) list.Add((row, def));
@@ -180,6 +180,8 @@ public sealed class UnitCatalog
                 dim = res.Unit.Dimension;
                 tag = res.Unit.Tag;
             }
+            // The trade's compound torque spellings (oz·in, Nm, kgf·cm…) name a torque, as N·m does.
+            if (note is not null && dim.SiEquals(Dimension.FromSi(2, 1, -2))) tag = Kinds.Torque;
             _symbols[key] = new UnitDefinition(key, name, factor * scale, 0, dim, tag, "curated", note);
         }
     }

@@ -79,17 +79,18 @@ internal ref struct UnitExpressionParser
         while (_error is null && _pos < _text.Length)
         {
             char c = _text[_pos];
-            if (c == '·' || c == '.')
+            if (c == '·' || c == '.' || c == '/')
             {
-                _pos++;
+                int at = _pos++;
                 var (f, d) = ParsePowered();
-                factor *= f; dim *= d;
-            }
-            else if (c == '/')
-            {
-                _pos++;
-                var (f, d) = ParsePowered();
-                factor /= f; dim /= d;
+                int sign = c == '/' ? -1 : 1;
+                if (!Dimension.CanCombine(dim, d, sign))
+                {
+                    _error ??= new UnitError(DiagnosticCodes.MalformedUnit, DiagnosticMessages.ExponentLimit(Dimension.MaxExponent), at, 1);
+                    return (factor, dim);
+                }
+                factor = sign > 0 ? factor * f : factor / f;
+                dim = sign > 0 ? dim * d : dim / d;
             }
             else break;
         }
@@ -106,6 +107,11 @@ internal ref struct UnitExpressionParser
             if (n == 0 || Math.Abs(n) > 12)
             {
                 _error ??= new UnitError(DiagnosticCodes.MalformedUnit, DiagnosticMessages.BadUnitExponent(n), _pos - 1, 1);
+                return (factor, dim);
+            }
+            if (!dim.CanPow(n, 1))
+            {
+                _error ??= new UnitError(DiagnosticCodes.MalformedUnit, DiagnosticMessages.ExponentLimit(Dimension.MaxExponent), _pos - 1, 1);
                 return (factor, dim);
             }
             factor = Math.Pow(factor, n);

@@ -12,10 +12,7 @@ public static class CaseRunner
 {
     public static void Run(string where, string input, string expected, string source)
     {
-        var parts = input.Split("; ");
-        var lines = parts[..^1].Append("result = " + parts[^1]);
-        string text = string.Join("\n", lines) + "\n";
-        var result = SheetRunner.Run(text);
+        var result = SheetRunner.Run(SheetText(input));
         var tokens = expected.Split(' ', StringSplitOptions.RemoveEmptyEntries).ToList();
         var codes = tokens.Where(t => t.StartsWith("CUT", StringComparison.Ordinal)).ToList();
         tokens.RemoveAll(t => t.StartsWith("CUT", StringComparison.Ordinal));
@@ -44,6 +41,14 @@ public static class CaseRunner
         double tolerance = HalfLastDigit(tokens[0]) + 1e-12 * Math.Abs(number);
         Assert.True(Math.Abs(def.Value.Number - number) <= tolerance,
             $"{where}: expected {number} {unit} (±{tolerance}), got {def.Value.Number.ToString("R", CultureInfo.InvariantCulture)} {def.Value.Unit} ({source})");
+    }
+
+    /// <summary>The sheet a case stands for: statements separated by "; ", the last one defining <c>result</c>.</summary>
+    public static string SheetText(string input)
+    {
+        var parts = input.Split("; ");
+        var lines = parts[..^1].Append("result = " + parts[^1]);
+        return string.Join("\n", lines) + "\n";
     }
 
     /// <summary>Half a unit in the last digit written: "104.72" gives 0.005, "1080" gives 0.5, "1.5e3" gives 50.</summary>

@@ -39,7 +39,7 @@ internal static class ExpressionGrammar
             source ??= t.Span.Source;
             tokens.Add(new SyntaxToken(t.Kind, t.Span.Position.Absolute, t.Span.Length));
         }
-        var result = ExpressionParser.Parse(System.Runtime.InteropServices.CollectionsMarshal.AsSpan(tokens), source ?? "", 0);
+        var result = ExpressionParser.Parse(System.Runtime.InteropServices.CollectionsMarshal.AsSpan(tokens), source ?? "", 0, new StringPool());
         int consumed = result.Expression is null ? result.ErrorIndex : result.Next;
         var remainder = input;
         for (int i = 0; i < consumed && !remainder.IsAtEnd; i++) remainder = remainder.ConsumeToken().Remainder;

@@ -16,12 +16,14 @@ internal ref struct ExpressionParser
 {
     private readonly ReadOnlySpan<SyntaxToken> _tokens;
     private readonly string _text;
+    private readonly StringPool _pool;
     private int _pos;
 
-    private ExpressionParser(ReadOnlySpan<SyntaxToken> tokens, string text, int start)
+    private ExpressionParser(ReadOnlySpan<SyntaxToken> tokens, string text, int start, StringPool pool)
     {
         _tokens = tokens;
         _text = text;
+        _pool = pool;
         _pos = start;
         ErrorIndex = -1;
         Expected = "";
@@ -31,9 +33,9 @@ internal ref struct ExpressionParser
     private string Expected { get; set; }
 
     /// <summary>Parses one expression starting at <paramref name="start"/>; stops at the first token it cannot use.</summary>
-    public static ExpressionParseResult Parse(ReadOnlySpan<SyntaxToken> tokens, string text, int start)
+    public static ExpressionParseResult Parse(ReadOnlySpan<SyntaxToken> tokens, string text, int start, StringPool pool)
     {
-        var p = new ExpressionParser(tokens, text, start);
+        var p = new ExpressionParser(tokens, text, start, pool);
         var e = p.ParseExpression();
         if (e is null || p.ErrorIndex >= 0) return new ExpressionParseResult(null, p._pos, Math.Max(p.ErrorIndex, p._pos), p.Expected.Length == 0 ? "an expression" : p.Expected);
         return new ExpressionParseResult(e, p._pos, -1, "");
@@ -43,7 +45,7 @@ internal ref struct ExpressionParser
 
     private SyntaxToken Take() => _tokens[_pos++];
 
-    private string TextOf(SyntaxToken t) => _text.Substring(t.Start, t.Length);
+    private string TextOf(SyntaxToken t) => _pool.Get(_text, t.Start, t.Length);
 
     private ExpressionSyntax? Fail(string expected)
     {
@@ -169,7 +171,8 @@ internal ref struct ExpressionParser
         {
             var s = Take();
             string text = TextOf(s);
-            int sign = text.StartsWith('⁻') ? -1 : 1, value = 0;
+            int sign = text.StartsWith('⁻') ? -1 : 1;
+            double value = 0;
             foreach (char c in text)
             {
                 int d = Units.Superscript.DigitValue(c);
@@ -198,10 +201,11 @@ internal ref struct ExpressionParser
                 return ParseNameOrCall();
             case TokenKind.LParen:
             {
-                Take();
+                var open = Take();
                 var inner = ParseExpression();
                 if (inner is null) return null;
-                return Expect(TokenKind.RParen, "')'", out _) ? inner : null;
+                // The brackets belong to the expression's span (hover and underlines cover them).
+                return Expect(TokenKind.RParen, "')'", out var close) ? inner with { Span = TextSpan.FromBounds(open.Start, close.End) } : null;
             }
             case TokenKind.LBracket:
             {

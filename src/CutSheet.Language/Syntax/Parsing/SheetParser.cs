@@ -17,115 +17,122 @@ namespace CutSheet.Language.Syntax.Parsing;
 internal static class SheetParser
 {
     private const int MaxDepth = 64;
-    private const int MaxTokensPerStatement = 4000;
+    /// <summary>Enough for a list of 10,000 values; long chains are parsed and evaluated without deep recursion.</summary>
+    private const int MaxTokensPerStatement = 25_000;
 
     public static SheetSyntax Parse(SourceText source)
     {
         var tokens = Tokenizer.Tokenize(source.Text);
         var diagnostics = new List<Diagnostic>();
         var statements = new List<StatementSyntax>();
-        foreach (var group in Group(tokens))
+        var significant = new SyntaxToken[tokens.Length];
+        var pool = new StringPool();
+        foreach (var group in Group(tokens, significant))
         {
-            var statement = ParseStatement(source, tokens, group, diagnostics);
+            var statement = ParseStatement(source, significant.AsSpan(group.Start, group.Count), group.Comment, diagnostics, pool);
             if (statement is not null) statements.Add(statement);
         }
         return new SheetSyntax(source, tokens, statements, diagnostics);
     }
 
-    /// <summary>Indices of the significant tokens of each statement (newlines excluded) and the description comment.</summary>
-    private sealed record StatementGroup(List<int> Indices, int CommentIndex, bool IsFunction);
+    /// <summary>
+    /// A statement's significant tokens, a contiguous range of the sheet's significant tokens
+    /// (line breaks and trivia dropped; indented clause lines are consecutive, so they extend the
+    /// range), and the comment on its first line, which is its description.
+    /// </summary>
+    private readonly record struct StatementGroup(int Start, int Count, SyntaxToken? Comment, bool IsFunction);
 
-    private static List<StatementGroup> Group(SyntaxToken[] tokens)
+    private static List<StatementGroup> Group(SyntaxToken[] tokens, SyntaxToken[] significant)
     {
         var groups = new List<StatementGroup>();
-        int i = 0;
+        int n = 0, i = 0;
         while (i < tokens.Length)
         {
-            var line = new List<int>();
-            int comment = -1;
+            int lineStart = n;
+            SyntaxToken? comment = null;
             bool indented = false;
             for (; i < tokens.Length && tokens[i].Kind != TokenKind.Newline; i++)
             {
                 var t = tokens[i];
-                if (t.Kind == TokenKind.Comment) { if (line.Count > 0) comment = i; continue; }
-                if (t.Kind == TokenKind.Whitespace) { if (line.Count == 0 && (t.Flags & TokenFlags.Indented) != 0) indented = true; continue; }
+                if (t.Kind == TokenKind.Comment) { if (n > lineStart) comment = t; continue; }
+                if (t.Kind == TokenKind.Whitespace) { if (n == lineStart && (t.Flags & TokenFlags.Indented) != 0) indented = true; continue; }
                 if (t.Kind == TokenKind.TriviaNewline) continue;
-                line.Add(i);
+                significant[n++] = t;
             }
             i++; // the newline
-            if (line.Count == 0) continue;
-            var first = tokens[line[0]].Kind;
-            var previous = groups.Count > 0 ? groups[^1] : null;
-            bool continues = indented && previous is not null && tokens[previous.Indices[0]].Kind != TokenKind.Heading && (
-                first is TokenKind.Source or TokenKind.Assumed or TokenKind.Accepted or TokenKind.Valid or TokenKind.Require
-                    or TokenKind.Where or TokenKind.Row
-                || (first is TokenKind.Caution or TokenKind.Notice or TokenKind.Warning && previous.IsFunction));
-            if (continues)
+            int count = n - lineStart;
+            if (count == 0) continue;
+            var first = significant[lineStart].Kind;
+            if (indented && groups.Count > 0)
             {
-                previous!.Indices.AddRange(line);
-                continue;
+                var previous = groups[^1];
+                bool continues = significant[previous.Start].Kind != TokenKind.Heading && (
+                    first is TokenKind.Source or TokenKind.Assumed or TokenKind.Accepted or TokenKind.Valid or TokenKind.Require
+                        or TokenKind.Where or TokenKind.Row
+                    || (first is TokenKind.Caution or TokenKind.Notice or TokenKind.Warning && previous.IsFunction));
+                if (continues)
+                {
+                    groups[^1] = previous with { Count = previous.Count + count };
+                    continue;
+                }
             }
-            bool isFunction = first == TokenKind.Identifier && line.Count > 1 && tokens[line[1]].Kind == TokenKind.LParen;
-            groups.Add(new StatementGroup(line, comment, isFunction));
+            bool isFunction = first == TokenKind.Identifier && count > 1 && significant[lineStart + 1].Kind == TokenKind.LParen;
+            groups.Add(new StatementGroup(lineStart, count, comment, isFunction));
         }
         return groups;
     }
 
-    private static StatementSyntax? ParseStatement(SourceText source, SyntaxToken[] all, StatementGroup group, List<Diagnostic> diagnostics)
+    private static StatementSyntax? ParseStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, SyntaxToken? comment, List<Diagnostic> diagnostics, StringPool pool)
     {
-        var idx = group.Indices;
-        var first = all[idx[0]];
-        var span = TextSpan.FromBounds(first.Start, all[idx[^1]].End);
+        var first = tokens[0];
+        var span = TextSpan.FromBounds(first.Start, tokens[^1].End);
 
         if (first.Kind == TokenKind.Heading)
         {
             string text = source.Slice(first.Span);
             int level = 0;
             while (level < text.Length && text[level] == '#') level++;
-            if (idx.Count > 1) diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.NotAStatement));
+            if (tokens.Length > 1) diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.NotAStatement));
             return new HeadingSyntax(first.Span, level, text[level..].Trim());
         }
 
-        bool fatal = ScanTokens(source, all, idx, diagnostics);
+        bool fatal = ScanTokens(source, tokens, diagnostics);
         StatementSyntax? statement = null;
-        if (!fatal && first.Kind == TokenKind.Identifier && idx.Count > 1 && all[idx[1]].Kind == TokenKind.Equals)
+        if (!fatal && first.Kind == TokenKind.Identifier && tokens.Length > 1 && tokens[1].Kind == TokenKind.Equals)
         {
-            statement = ParseDefinition(source, all, idx, diagnostics);
+            statement = ParseDefinition(source, tokens, diagnostics, pool);
         }
         else if (!fatal)
         {
-            var second = idx.Count > 1 ? all[idx[1]].Kind : TokenKind.None;
+            var second = tokens.Length > 1 ? tokens[1].Kind : TokenKind.None;
             var parser = StatementGrammar.For(first.Kind, second);
             if (parser is null)
             {
                 diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NotAStatement, span, DiagnosticMessages.NotAStatement));
                 return new ErrorStatementSyntax(span);
             }
-            var list = ToTokenList(source, all, idx);
-            var result = parser(list);
+            var result = parser(ToTokenList(source, tokens));
             if (result.HasValue)
             {
                 statement = result.Value;
             }
             else
             {
-                diagnostics.Add(ParseError(source, all, idx, result));
+                diagnostics.Add(ParseError(source, tokens, result));
             }
         }
-        statement ??= Recover(source, all, idx, span);
-        return group.CommentIndex >= 0 ? WithDescription(statement, source, all[group.CommentIndex]) : statement;
+        statement ??= Recover(source, tokens, span);
+        return comment is { } c ? WithDescription(statement, source, c) : statement;
     }
 
     /// <summary>
     /// The common statement, <c>name = expression [clauses]</c>, parsed directly (the hot path);
     /// clauses, when present, go through the statement grammar.
     /// </summary>
-    private static StatementSyntax? ParseDefinition(SourceText source, SyntaxToken[] all, List<int> idx, List<Diagnostic> diagnostics)
+    private static StatementSyntax? ParseDefinition(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics, StringPool pool)
     {
-        var tokens = new SyntaxToken[idx.Count];
-        for (int k = 0; k < tokens.Length; k++) tokens[k] = all[idx[k]];
         var name = tokens[0];
-        var result = ExpressionParser.Parse(tokens, source.Text, 2);
+        var result = ExpressionParser.Parse(tokens, source.Text, 2, pool);
         if (result.Expression is null)
         {
             diagnostics.Add(ExpressionError(source, tokens, result.ErrorIndex, result.Expected));
@@ -134,20 +141,27 @@ internal static class SheetParser
         var clauses = ClausesSyntax.Empty;
         if (result.Next < tokens.Length)
         {
-            var rest = StatementGrammar.Clauses.AtEnd()(ToTokenList(source, all, idx.GetRange(result.Next, idx.Count - result.Next)));
-            if (!rest.HasValue)
+            var rest = tokens[result.Next..];
+            var parsed = StatementGrammar.Clauses.AtEnd()(ToTokenList(source, rest));
+            if (!parsed.HasValue)
             {
-                var at = rest.Location.IsAtEnd ? tokens.Length : result.Next + idx.GetRange(result.Next, idx.Count - result.Next).FindIndex(i => all[i].Start == rest.Location.First().Span.Position.Absolute);
+                int at = parsed.Location.IsAtEnd ? tokens.Length : result.Next + IndexAt(rest, parsed.Location.First().Span.Position.Absolute);
                 diagnostics.Add(ExpressionError(source, tokens, at, "an operator, 'as', a clause (assumed, source, accepted) or the end of the line"));
                 return null;
             }
-            clauses = rest.Value;
+            clauses = parsed.Value;
         }
         var span = TextSpan.FromBounds(name.Start, tokens[^1].End);
-        return new DefinitionSyntax(span, source.Text.Substring(name.Start, name.Length), name.Span, result.Expression) { Clauses = clauses };
+        return new DefinitionSyntax(span, pool.Get(source.Text, name.Start, name.Length), name.Span, result.Expression) { Clauses = clauses };
     }
 
-    private static Diagnostic ExpressionError(SourceText source, SyntaxToken[] tokens, int index, string expected)
+    private static int IndexAt(ReadOnlySpan<SyntaxToken> tokens, int start)
+    {
+        for (int k = 0; k < tokens.Length; k++) if (tokens[k].Start == start) return k;
+        return tokens.Length;
+    }
+
+    private static Diagnostic ExpressionError(SourceText source, ReadOnlySpan<SyntaxToken> tokens, int index, string expected)
     {
         if (index >= tokens.Length)
         {
@@ -170,19 +184,19 @@ internal static class SheetParser
     }
 
     /// <summary>Reports token-level problems; true when the statement cannot be parsed meaningfully.</summary>
-    private static bool ScanTokens(SourceText source, SyntaxToken[] all, List<int> idx, List<Diagnostic> diagnostics)
+    private static bool ScanTokens(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics)
     {
-        bool fatal = false;
-        int depth = 0, maxDepth = 0, prefixRun = 0, maxPrefixRun = 0;
-        var open = new Stack<SyntaxToken>();
-        if (idx.Count > MaxTokensPerStatement)
+        if (tokens.Length > MaxTokensPerStatement)
         {
-            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NestingTooDeep, all[idx[0]].Span, DiagnosticMessages.LimitExceeded($"a statement has more than {MaxTokensPerStatement} tokens")));
+            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.LimitExceeded, tokens[0].Span, DiagnosticMessages.LimitExceeded($"a statement has more than {MaxTokensPerStatement} tokens")));
             return true;
         }
-        foreach (int i in idx)
+        bool fatal = false;
+        int depth = 0, maxDepth = 0, prefixRun = 0, maxPrefixRun = 0;
+        // The open brackets not yet closed, innermost last (deeper than the limit is an error anyway).
+        Span<int> open = stackalloc int[MaxDepth + 1];
+        foreach (var t in tokens)
         {
-            var t = all[i];
             switch (t.Kind)
             {
                 case TokenKind.Error:
@@ -193,14 +207,18 @@ internal static class SheetParser
                     diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnterminatedString, t.Span, DiagnosticMessages.UnterminatedString));
                     fatal = true;
                     break;
-                case TokenKind.Unit:
-                    string unit = source.Slice(t.Span);
-                    if (unit is "\"" or "″")
+                case TokenKind.Unit when t.Length == 1:
+                    char mark = source.Text[t.Start];
+                    if (mark is '"' or '″')
                         diagnostics.Add(Diagnostic.Error(DiagnosticCodes.InchMark, t.Span, DiagnosticMessages.InchMark,
                             new Fix("write in", [new TextEdit(t.Span, " in")])));
-                    else if (unit is "'" or "′")
+                    else if (mark is '\'' or '′')
                         diagnostics.Add(Diagnostic.Error(DiagnosticCodes.FootMark, t.Span, DiagnosticMessages.FootMark,
                             new Fix("write ft", [new TextEdit(t.Span, " ft")])));
+                    break;
+                case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) == 0 && !double.IsFinite(NumberText.Parse(source.Slice(t.Span))):
+                    diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NotFinite, t.Span, DiagnosticMessages.NumberNotFinite(source.Slice(t.Span))));
+                    fatal = true;
                     break;
                 case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) != 0:
                     string written = source.Slice(t.Span);
@@ -210,61 +228,60 @@ internal static class SheetParser
                         fixedText is null ? null : new Fix($"write {fixedText}", [new TextEdit(t.Span, fixedText)])));
                     break;
                 case TokenKind.LParen or TokenKind.LBracket:
-                    open.Push(t);
+                    if (depth <= MaxDepth) open[depth] = t.Start;
                     depth++;
                     maxDepth = Math.Max(maxDepth, depth);
                     break;
                 case TokenKind.RParen or TokenKind.RBracket:
-                    if (open.Count == 0)
+                    if (depth == 0)
                     {
-                        diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnbalancedBracket, t.Span, DiagnosticMessages.UnbalancedBracket));
+                        diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnbalancedBracket, t.Span, DiagnosticMessages.StrayClosingBracket));
                         fatal = true;
                     }
-                    else { open.Pop(); depth--; }
+                    else depth--;
                     break;
             }
             bool prefix = t.Kind is TokenKind.Minus or TokenKind.Plus or TokenKind.Not or TokenKind.Caret or TokenKind.If;
             prefixRun = prefix ? prefixRun + 1 : t.Kind is TokenKind.Number or TokenKind.Identifier or TokenKind.Unit ? prefixRun : 0;
-            if (t.Kind is TokenKind.Number or TokenKind.Identifier && !prefix) prefixRun = Math.Max(0, prefixRun);
             maxPrefixRun = Math.Max(maxPrefixRun, prefixRun);
         }
-        if (open.Count > 0 && !fatal)
+        if (depth > 0 && !fatal)
         {
-            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnbalancedBracket, open.Peek().Span, DiagnosticMessages.UnbalancedBracket));
+            int at = open[Math.Min(depth, MaxDepth + 1) - 1];
+            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnbalancedBracket, new TextSpan(at, 1), DiagnosticMessages.UnbalancedBracket));
             fatal = true;
         }
         if (maxDepth > MaxDepth || maxPrefixRun > MaxDepth)
         {
-            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NestingTooDeep, all[idx[0]].Span, DiagnosticMessages.NestingTooDeep));
+            diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NestingTooDeep, tokens[0].Span, DiagnosticMessages.NestingTooDeep));
             fatal = true;
         }
         return fatal;
     }
 
-    private static TokenList<TokenKind> ToTokenList(SourceText source, SyntaxToken[] all, List<int> idx)
+    private static TokenList<TokenKind> ToTokenList(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
     {
-        var list = new Token<TokenKind>[idx.Count];
-        for (int k = 0; k < idx.Count; k++)
+        var list = new Token<TokenKind>[tokens.Length];
+        for (int k = 0; k < tokens.Length; k++)
         {
-            var t = all[idx[k]];
+            var t = tokens[k];
             var p = source.GetPosition(t.Start);
             list[k] = new Token<TokenKind>(t.Kind, new Superpower.Model.TextSpan(source.Text, new Position(t.Start, p.Line + 1, p.Column + 1), t.Length));
         }
         return new TokenList<TokenKind>(list);
     }
 
-    private static Diagnostic ParseError(SourceText source, SyntaxToken[] all, List<int> idx, TokenListParserResult<TokenKind, StatementSyntax> result)
+    private static Diagnostic ParseError(SourceText source, ReadOnlySpan<SyntaxToken> tokens, TokenListParserResult<TokenKind, StatementSyntax> result)
     {
         string expected = result.Expectations is { Length: > 0 } e ? string.Join(", ", e.Distinct().Take(6)) : "more";
         if (result.Location.IsAtEnd)
         {
-            var last = all[idx[^1]];
-            return Diagnostic.Error(DiagnosticCodes.IncompleteStatement, new TextSpan(last.End, 0), DiagnosticMessages.Incomplete("expected " + expected));
+            return Diagnostic.Error(DiagnosticCodes.IncompleteStatement, new TextSpan(tokens[^1].End, 0), DiagnosticMessages.Incomplete("expected " + expected));
         }
         var token = result.Location.First();
         var span = new TextSpan(token.Span.Position.Absolute, token.Span.Length);
-        int at = idx.FindIndex(i => all[i].Start == span.Start);
-        if (token.Kind == TokenKind.Identifier && at > 0 && all[idx[at - 1]].Kind is TokenKind.Identifier or TokenKind.RParen
+        int at = IndexAt(tokens, span.Start);
+        if (token.Kind == TokenKind.Identifier && at > 0 && at < tokens.Length && tokens[at - 1].Kind is TokenKind.Identifier or TokenKind.RParen
             && Units.UnitCatalog.Default.IsSymbol(token.ToStringValue()))
         {
             return Diagnostic.Error(DiagnosticCodes.UnitWithoutNumber, span, DiagnosticMessages.UnitWithoutNumber);
@@ -283,17 +300,17 @@ internal static class SheetParser
         _ => $"'{text}'",
     };
 
-    private static StatementSyntax Recover(SourceText source, SyntaxToken[] all, List<int> idx, TextSpan span)
+    private static StatementSyntax Recover(SourceText source, ReadOnlySpan<SyntaxToken> tokens, TextSpan span)
     {
-        var first = all[idx[0]];
-        if (first.Kind == TokenKind.Identifier && idx.Count >= 2 && all[idx[1]].Kind == TokenKind.Equals)
+        var first = tokens[0];
+        if (first.Kind == TokenKind.Identifier && tokens.Length >= 2 && tokens[1].Kind == TokenKind.Equals)
         {
-            var rest = idx.Count > 2 ? TextSpan.FromBounds(all[idx[2]].Start, span.End) : new TextSpan(all[idx[1]].End, 0);
+            var rest = tokens.Length > 2 ? TextSpan.FromBounds(tokens[2].Start, span.End) : new TextSpan(tokens[1].End, 0);
             return new DefinitionSyntax(span, source.Slice(first.Span), first.Span, new ErrorExpressionSyntax(rest));
         }
-        if (first.Kind == TokenKind.Identifier && idx.Count >= 2 && all[idx[1]].Kind == TokenKind.LParen)
+        if (first.Kind == TokenKind.Identifier && tokens.Length >= 2 && tokens[1].Kind == TokenKind.LParen)
         {
-            var header = StatementGrammar.FunctionHeader(ToTokenList(source, all, idx));
+            var header = StatementGrammar.FunctionHeader(ToTokenList(source, tokens));
             if (header.HasValue)
             {
                 var (name, parameters, kind) = header.Value;

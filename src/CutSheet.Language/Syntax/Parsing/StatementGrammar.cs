@@ -47,7 +47,8 @@ internal static class StatementGrammar
         from key in Token.EqualTo(TokenKind.Identifier)
         from colon in Token.EqualTo(TokenKind.Colon)
         from cells in Cell.AtLeastOnceDelimitedBy(Token.EqualTo(TokenKind.Comma))
-        from source in Token.EqualTo(TokenKind.Source).IgnoreThen(ExpressionGrammar.Text).Select(t => (TextValueSyntax?)t).OptionalOrDefault()
+        from source in Token.EqualTo(TokenKind.Source).Where(s => s.Span.Position.Line == row.Span.Position.Line)
+            .IgnoreThen(ExpressionGrammar.Text).Select(t => (TextValueSyntax?)t).Try().OptionalOrDefault()
         select new TableRowSyntax(Of(row).Cover(source?.Span ?? cells[^1].Span), key.ToStringValue(), Of(key), cells, source);
 
     private static readonly TokenListParser<TokenKind, (string Keyword, TextSpan Span, object? Node)> Clause =
@@ -156,6 +157,14 @@ internal static class StatementGrammar
         from clauses in Clauses
         select (StatementSyntax)new TableSyntax(Between(table, close), name.ToStringValue(), Of(name), key.ToStringValue(), Of(key)) { Clauses = clauses };
 
+    private static readonly TokenListParser<TokenKind, StatementSyntax> KindDeclaration =
+        from keyword in Token.EqualTo(TokenKind.KindKeyword)
+        from name in Token.EqualTo(TokenKind.Identifier)
+        from eq in Token.EqualTo(TokenKind.Equals)
+        from basis in Token.EqualTo(TokenKind.Identifier)
+        from clauses in Clauses
+        select (StatementSyntax)new KindDeclarationSyntax(Between(keyword, basis), name.ToStringValue(), Of(name), basis.ToStringValue(), Of(basis)) { Clauses = clauses };
+
     /// <summary>The parser for a statement that starts with the given tokens, or null when no statement starts so.</summary>
     public static TokenListParser<TokenKind, StatementSyntax>? For(TokenKind first, TokenKind second) => first switch
     {
@@ -168,6 +177,7 @@ internal static class StatementGrammar
         TokenKind.Display => Display.AtEnd(),
         TokenKind.Choice => Choice.AtEnd(),
         TokenKind.Table => Table.AtEnd(),
+        TokenKind.KindKeyword => KindDeclaration.AtEnd(),
         _ => null,
     };
 
