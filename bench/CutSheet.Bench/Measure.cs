@@ -19,6 +19,9 @@ internal static class Measure
 {
     public static double Sink;
 
+    /// <summary>Print every run's time (--raw).</summary>
+    public static bool Raw;
+
     /// <summary>
     /// Warm-up, then <paramref name="runs"/> timed runs. The warm-up lasts at least
     /// <paramref name="warmupSeconds"/> and goes on (up to 30 s) while the CPU time per call still
@@ -62,6 +65,7 @@ internal static class Measure
             alloc += (GC.GetAllocatedBytesForCurrentThread() - a0) / (double)inner;
             times[r] = (t1 - t0) * 1000.0 / Stopwatch.Frequency / inner;
         }
+        if (Raw) Console.Error.WriteLine($"  raw ms: {string.Join(" ", times.Select(t => t.ToString("F2", System.Globalization.CultureInfo.InvariantCulture)))}");
         Array.Sort(times);
         Array.Sort(cpu);
         return new Timing(Median(times), times[0], alloc / runs, runs, pause / runs, g0 / runs, g1 / runs, g2 / runs, Median(cpu));

@@ -21,11 +21,14 @@ if (opts.Help)
                            (into bench/out/publish/{aot,r2r,jit}; ~1-2 minutes)
           --lines N        lines of the generated sheet (multiple of 100; default 10000)
           --runs N         timed runs per in-process figure (default 15)
+          --warmup N       evaluations of the sheet before any timing (default 150: lets tiered JIT settle)
           --cold-runs N    fresh processes per cold figure (default 10)
-          --pint-runs N    timed pint runs (default 5)
+          --pint-runs N    timed pint runs (default 7)
           --no-pint  --no-cold  --no-kinds  --no-phases
+          --raw            also print every timed run (on standard error)
           --loop S [--loop-kind KIND]   only evaluate the sheet (or a sheet of one kind of line) for S seconds,
-                           for a profiler such as dotnet-trace
+                           for a profiler (perf, dotnet-trace); see docs/performance.md
+          --once           evaluate bench/out/bench.cutsheet once in this fresh process and print its GC count
           --out DIR        working folder (default bench/out)
         """);
     return 0;
@@ -88,6 +91,8 @@ if (opts.LoopSeconds > 0)
     {
         // As in the timed runs: a collected heap before each sheet (filter GC.Collect out of the profile).
         GC.Collect();
+        GC.WaitForPendingFinalizers();
+        GC.Collect();
         Measure.Sink += SheetRunner.Run(loopText).Statements.Count;
         iterations++;
     }
@@ -95,11 +100,16 @@ if (opts.LoopSeconds > 0)
     return 0;
 }
 Console.WriteLine($"- CutSheet evaluates it with no diagnostics: {result.Definitions.Count(d => d.Value is not null):N0} values, {checks} checks passed");
-Console.WriteLine();
 
 // ---------- side by side ----------
+// Tiered JIT promotes a method called once per sheet only after ~30 calls at tier 0 and ~30 more
+// instrumented (dynamic PGO), each step behind a background compile: warm up with 150 sheets first.
+var warmAll = Stopwatch.StartNew();
+for (int i = 0; i < opts.WarmupSheets; i++) Measure.Sink += SheetRunner.Run(text).Statements.Count;
+Console.WriteLine($"- warm-up: {opts.WarmupSheets} evaluations of the sheet in {warmAll.Elapsed.TotalSeconds:F1} s, then medians of {opts.Runs} runs");
+Console.WriteLine();
 var floor = new Floor(opts.Lines);
-var tRun = Measure.Run(() => SheetRunner.Run(text).Statements.Count, opts.Runs, warmupSeconds: 3.0);
+var tRun = Measure.Run(() => SheetRunner.Run(text).Statements.Count, opts.Runs, warmupSeconds: 1.0);
 var tFloor = Measure.Run(() => floor.Run(opts.Lines), opts.Runs, inner: 200);
 double cutX = Si(result, $"x{floor.LastX}"), cutF = Si(result, $"F{floor.LastF}");
 
@@ -346,7 +356,7 @@ internal sealed record PintResult(string Version, string Python, double MedianMs
 internal sealed class Options
 {
     public bool Help, Publish, Once, NoPint, NoCold, NoKinds, NoPhases;
-    public int Lines = 10_000, Runs = 15, ColdRuns = 10, PintRuns = 5;
+    public int Lines = 10_000, Runs = 15, ColdRuns = 10, PintRuns = 7, WarmupSheets = 150;
     public string? Out, LoopKind;
     public double LoopSeconds;
 
@@ -361,12 +371,14 @@ internal sealed class Options
                 case "-h" or "--help": o.Help = true; break;
                 case "--publish": o.Publish = true; break;
                 case "--once": o.Once = true; break;
+                case "--raw": Measure.Raw = true; break;
                 case "--no-pint": o.NoPint = true; break;
                 case "--no-cold": o.NoCold = true; break;
                 case "--no-kinds": o.NoKinds = true; break;
                 case "--no-phases": o.NoPhases = true; break;
                 case "--lines": o.Lines = Next(); break;
                 case "--runs": o.Runs = Next(); break;
+                case "--warmup": o.WarmupSheets = Next(); break;
                 case "--cold-runs": o.ColdRuns = Next(); break;
                 case "--pint-runs": o.PintRuns = Next(); break;
                 case "--out": o.Out = args[++i]; break;
