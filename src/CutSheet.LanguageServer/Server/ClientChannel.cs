@@ -1,0 +1,22 @@
+using StreamJsonRpc;
+
+namespace CutSheet.LanguageServer.Server;
+
+/// <summary>Notifications from the server to the client; a closed connection drops them quietly.</summary>
+public sealed class ClientChannel(JsonRpc rpc, TextWriter stderr)
+{
+    public void Notify(string method, object parameters) => _ = NotifyAsync(method, parameters);
+
+    public async Task NotifyAsync(string method, object parameters)
+    {
+        try
+        {
+            // The object form: LSP params are one object, not an array.
+            await rpc.NotifyWithParameterObjectAsync(method, parameters).ConfigureAwait(false);
+        }
+        catch (Exception e) when (e is ConnectionLostException or ObjectDisposedException or IOException or OperationCanceledException)
+        {
+            await stderr.WriteLineAsync($"[cutsheet warning] could not send {method}: {e.Message}").ConfigureAwait(false);
+        }
+    }
+}
