@@ -99,7 +99,8 @@ public static class CompletionProvider
         var matches = UnitCatalog.Default.Symbols
             .Where(u => u.Symbol.StartsWith(typed, StringComparison.OrdinalIgnoreCase))
             .Select(u => (Unit: u, Rank: Array.IndexOf(CommonUnits, u.Symbol) is var r && r >= 0 ? r : CommonUnits.Length))
-            .OrderBy(x => x.Rank).ThenBy(x => x.Unit.Symbol.Length).ThenBy(x => x.Unit.Symbol, StringComparer.Ordinal)
+            // Unit symbols are case-sensitive (m, M, mm, Mm): exact-case matches first.
+            .OrderBy(x => x.Unit.Symbol.StartsWith(typed, StringComparison.Ordinal) ? 0 : 1).ThenBy(x => x.Rank).ThenBy(x => x.Unit.Symbol.Length).ThenBy(x => x.Unit.Symbol, StringComparer.Ordinal)
             .ToList();
         var items = matches.Take(UnitLimit)
             .Select((x, i) => new CompletionEntry(x.Unit.Symbol, CompletionCategory.Unit, x.Unit.Symbol, replace,

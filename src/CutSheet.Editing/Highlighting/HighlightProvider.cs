@@ -13,7 +13,8 @@ public static class HighlightProvider
         var spans = new List<HighlightSpan>();
         foreach (var token in analysis.Result.Syntax.Tokens)
         {
-            HighlightSpan? span = token.Kind switch
+            // A name the language reads as something else (the alias in 'use … as s' is lexed as a unit) is still a name.
+            HighlightSpan? span = occurrences.ContainsKey(token.Start) ? Name(token, occurrences) : token.Kind switch
             {
                 TokenKind.Comment => new(token.Span, HighlightCategory.Comment),
                 TokenKind.Heading => new(token.Span, HighlightCategory.Heading),
@@ -46,7 +47,7 @@ public static class HighlightProvider
             SymbolCategory.Option => HighlightCategory.Option,
             SymbolCategory.Table => HighlightCategory.Table,
             SymbolCategory.Kind or SymbolCategory.BuiltinKind => HighlightCategory.Kind,
-            SymbolCategory.Namespace => HighlightCategory.Namespace,
+            SymbolCategory.Namespace or SymbolCategory.Sheet => HighlightCategory.Namespace,
             SymbolCategory.BuiltinConstant => HighlightCategory.Constant,
             _ => HighlightCategory.Definition,
         };

@@ -34,7 +34,7 @@ public static class HoverProvider
             return text is null ? null : new HoverInfo(token.Span, text);
         }
         if (token.Kind == TokenKind.Check && analysis.Result.Checks.FirstOrDefault(c => c.Span.Contains(offset)) is { } check)
-            return new HoverInfo(token.Span, Check(check));
+            return new HoverInfo(token.Span, Check(check, analysis.Source.Slice(check.Check.Condition.Span)));
         return null;
     }
 
@@ -174,7 +174,7 @@ public static class HoverProvider
         return $"**{text}**: {name}{factor}\n\n{(kind is null ? "dimension " + unit.Dimension : kind.Name.Replace('_', ' ') + " · dimension " + unit.Dimension)}";
     }
 
-    private static string Check(CheckResult check)
+    private static string Check(CheckResult check, string condition)
     {
         string status = check.Status switch
         {
@@ -182,7 +182,7 @@ public static class HoverProvider
             CheckStatus.Failed => "**FAILED**",
             _ => "not evaluated",
         };
-        var md = new StringBuilder($"check {status}: {check.Text}");
+        var md = new StringBuilder($"check {status}: `{condition}`");
         if (check.Value is not null && check.Limit is not null)
             md.Append($"\n\n{check.Value.Primary} {check.Operator} {check.Limit.Primary}");
         if (check.Utilisation is { } u) md.Append($"\n\nutilisation {u * 100:0.#} %");

@@ -26,6 +26,11 @@ public static class FormulaSubstitution
             // A qualified name (x.T) is replaced whole, qualifier included.
             int start = occurrence.Span.Start;
             while (start > at && analysis.Text[start - 1] == '.') start = QualifierStart(analysis.Text, start - 1, at);
+            // A value with a unit or a sign before a power or after a minus is bracketed: '1.250 in^2' would square the unit only.
+            int after = occurrence.Span.End;
+            bool power = after < analysis.Text.Length && (analysis.Text[after] == '^' || Language.Units.Superscript.IsSuperscriptChar(analysis.Text[after]));
+            bool negated = start > 0 && analysis.Text[..start].TrimEnd().EndsWith('-');
+            if ((power && (value.Contains(' ') || value.StartsWith('-'))) || (negated && value.StartsWith('-'))) value = "(" + value + ")";
             text.Append(analysis.Text, at, start - at).Append(value);
             at = occurrence.Span.End;
         }
