@@ -24,13 +24,13 @@ public static class LanguageServerHost
         var serverLog = new ServerLog(log);
         var context = new ServerContext(serverLog, library ?? LibraryFiles.Default);
 
-        var formatter = new SystemTextJsonFormatter();
+        var formatter = new LspFormatter();
         var options = formatter.JsonSerializerOptions;
         options.PropertyNamingPolicy = JsonNamingPolicy.CamelCase;
         options.DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull;
         options.TypeInfoResolverChain.Insert(0, ProtocolJsonContext.Default);
 
-        using var rpc = new JsonRpc(new TolerantMessageHandler(output, input, formatter, serverLog));
+        using var rpc = new LspJsonRpc(new TolerantMessageHandler(output, input, formatter, serverLog));
         // The guards log every handler failure themselves; the library's own trace reports only what ends the connection.
         var trace = new TraceSource("cutsheet-lsp", SourceLevels.Critical);
         trace.Listeners.Clear();

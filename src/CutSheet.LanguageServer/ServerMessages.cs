@@ -10,6 +10,8 @@ public static class ServerMessages
     public const string BadMessage = "the message is not valid JSON-RPC and was dropped";
     public const string InternalError = "the request failed inside the server; the details are in the server's log";
 
+    public static string InvalidParams(string method, string detail) => $"the parameters of {method} do not fit: {detail}";
+
     public static string UnknownDocument(string uri) => $"the document {uri} is not open";
 
     public static string HandlerFailed(string method, Exception e) => $"{method} failed: {e.GetType().Name}: {e.Message}";

@@ -1,4 +1,3 @@
-using System.IO.Pipelines;
 using CutSheet.LanguageServer.Protocol;
 using CutSheet.LanguageServer.Server;
 using StreamJsonRpc;
@@ -12,7 +11,7 @@ namespace CutSheet.LanguageServer.Transport;
 /// dropped, and reading goes on with the next message. A bad header cannot be survived (there
 /// is no safe place to resume), so it ends the connection.
 /// </summary>
-public sealed class TolerantMessageHandler(Stream output, Stream input, IJsonRpcMessageFormatter formatter, ServerLog log)
+public sealed class TolerantMessageHandler(Stream output, Stream input, LspFormatter formatter, ServerLog log)
     : HeaderDelimitedMessageHandler(output, input, formatter)
 {
     protected override async ValueTask<JsonRpcMessage?> ReadCoreAsync(CancellationToken cancellationToken)
@@ -23,22 +22,17 @@ public sealed class TolerantMessageHandler(Stream output, Stream input, IJsonRpc
             {
                 return await base.ReadCoreAsync(cancellationToken).ConfigureAwait(false);
             }
-            catch (Exception e) when (IsBadBody(e))
+            catch (UnreadableMessageException e)
             {
-                log.Warning(ServerMessages.DroppedMessage(e.GetBaseException().Message));
+                log.Warning(ServerMessages.DroppedMessage(e.Message));
+                if (e.IsNotification) continue;
                 var error = new JsonRpcError
                 {
-                    RequestId = RequestId.Null,
-                    Error = new JsonRpcError.ErrorDetail { Code = (JsonRpcErrorCode)ErrorCodes.ParseError, Message = ServerMessages.BadMessage },
+                    RequestId = e.Id ?? RequestId.Null,
+                    Error = new JsonRpcError.ErrorDetail { Code = (JsonRpcErrorCode)e.Code, Message = ServerMessages.BadMessage },
                 };
                 await WriteAsync(error, cancellationToken).ConfigureAwait(false);
             }
         }
     }
-
-    /// <summary>A body that is not JSON, or not a JSON-RPC message; a broken header or stream is not one.</summary>
-    private static bool IsBadBody(Exception e) =>
-        e is System.Text.Json.JsonException or FormatException or InvalidCastException or NotSupportedException
-            or KeyNotFoundException or InvalidOperationException or ArgumentException
-        && e is not BadRpcHeaderException;
 }
