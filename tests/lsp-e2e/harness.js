@@ -48,9 +48,14 @@ async function start({ initializationOptions, capabilities, workspace } = {}) {
     const have = diagnostics.get(uri);
     if (have && test(have)) return Promise.resolve(have);
     return new Promise((resolve, reject) => {
-      const w = { test: (p) => p.uri === uri && test(p), resolve };
+      // The timer is cleared on success and never keeps the process alive.
+      const timer = setTimeout(() => {
+        const i = waiters.indexOf(w);
+        if (i >= 0) { waiters.splice(i, 1); reject(new Error(`no diagnostics for ${uri} in ${timeoutMs} ms; stderr: ${stderr}`)); }
+      }, timeoutMs);
+      timer.unref();
+      const w = { test: (p) => p.uri === uri && test(p), resolve: (p) => { clearTimeout(timer); resolve(p); } };
       waiters.push(w);
-      setTimeout(() => { const i = waiters.indexOf(w); if (i >= 0) { waiters.splice(i, 1); reject(new Error(`no diagnostics for ${uri} in ${timeoutMs} ms; stderr: ${stderr}`)); } }, timeoutMs);
     });
   }
 
