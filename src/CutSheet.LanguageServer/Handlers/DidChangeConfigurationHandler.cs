@@ -8,5 +8,9 @@ public sealed class DidChangeConfigurationHandler(ServerContext context) : INoti
 {
     public string Method => "workspace/didChangeConfiguration";
 
-    public void Handle(DidChangeConfigurationParams p) => context.State.Settings = context.State.Settings.Merge(p.Settings);
+    public void Handle(DidChangeConfigurationParams p)
+    {
+        context.State.Settings = context.State.Settings.Merge(p.Settings);
+        context.Scheduler.RefreshViews();
+    }
 }

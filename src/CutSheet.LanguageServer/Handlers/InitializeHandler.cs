@@ -16,6 +16,8 @@ public sealed class InitializeHandler(ServerContext context) : IRequestHandler<I
         state.Positions = new PositionMapper(PositionMapper.Negotiate(p.Capabilities?.General?.PositionEncodings));
         state.ClientShowsHints = p.Capabilities?.TextDocument?.InlayHint is not null;
         state.Settings = state.Settings.Merge(p.InitializationOptions);
+        state.ClientRefreshesHints = p.Capabilities?.Workspace?.InlayHint?.RefreshSupport == true;
+        state.ClientRefreshesLenses = p.Capabilities?.Workspace?.CodeLens?.RefreshSupport == true;
         string? rootUri = p.WorkspaceFolders?.FirstOrDefault()?.Uri ?? p.RootUri;
         state.WorkspaceRoot = rootUri is not null ? DocumentUris.ToPath(rootUri) : p.RootPath;
         state.Phase = SessionPhase.Running;

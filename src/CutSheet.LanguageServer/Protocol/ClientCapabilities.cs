@@ -5,4 +5,5 @@ public sealed class ClientCapabilities
 {
     public GeneralClientCapabilities? General { get; set; }
     public TextDocumentClientCapabilities? TextDocument { get; set; }
+    public WorkspaceClientCapabilities? Workspace { get; set; }
 }

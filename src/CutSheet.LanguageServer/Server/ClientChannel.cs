@@ -7,6 +7,21 @@ public sealed class ClientChannel(JsonRpc rpc, TextWriter stderr)
 {
     public void Notify(string method, object parameters) => _ = NotifyAsync(method, parameters);
 
+    /// <summary>Sends a request without parameters (the refresh requests) and does not wait for or need its answer.</summary>
+    public void Request(string method) => _ = RequestAsync(method);
+
+    private async Task RequestAsync(string method)
+    {
+        try
+        {
+            await rpc.InvokeWithParameterObjectAsync(method, null).ConfigureAwait(false);
+        }
+        catch (Exception e) when (e is RemoteInvocationException or ConnectionLostException or ObjectDisposedException or IOException or OperationCanceledException)
+        {
+            await stderr.WriteLineAsync($"[cutsheet warning] {method} was not answered: {e.Message}").ConfigureAwait(false);
+        }
+    }
+
     public async Task NotifyAsync(string method, object parameters)
     {
         try

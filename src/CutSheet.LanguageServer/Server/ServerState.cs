@@ -18,6 +18,12 @@ public sealed class ServerState
 
     public string? WorkspaceRoot { get; set; }
 
+    /// <summary>The client accepts <c>workspace/inlayHint/refresh</c> (hints of a sheet change when a sheet it imports does).</summary>
+    public bool ClientRefreshesHints { get; set; }
+
+    /// <summary>The client accepts <c>workspace/codeLens/refresh</c>.</summary>
+    public bool ClientRefreshesLenses { get; set; }
+
     public bool LensesWanted => Settings.Lenses ?? !ClientShowsHints;
 
     /// <summary>Completes with the process exit code when the client sends <c>exit</c>.</summary>

@@ -49,6 +49,15 @@ public sealed class SheetScheduler(ServerState state, DocumentStore documents, D
         document.Remember(analysis);
         Publish(document, analysis);
         if (refreshImporters && document.Path is not null) RefreshImporters(document.Path);
+        // An importer's values changed without an edit of its own: the editor asks again only when told.
+        else if (!refreshImporters) RefreshViews();
+    }
+
+    /// <summary>Asks the client to request hints and lenses again, where it accepts that.</summary>
+    public void RefreshViews()
+    {
+        if (state.ClientRefreshesHints) Client?.Request("workspace/inlayHint/refresh");
+        if (state.ClientRefreshesLenses && state.LensesWanted) Client?.Request("workspace/codeLens/refresh");
     }
 
     public void Publish(OpenDocument document, SheetAnalysis analysis)

@@ -128,7 +128,13 @@ public sealed class RawLspClient : IAsyncDisposable
                 await _read.ReadExactlyAsync(body);
                 var message = JsonNode.Parse(body)!.AsObject();
                 if (message.ContainsKey("method") && !message.ContainsKey("id")) { _notifications.Enqueue(message); continue; }
-                if (message.ContainsKey("method")) { _notifications.Enqueue(message); continue; } // a request from the server
+                if (message.ContainsKey("method"))
+                {
+                    // A request from the server (a refresh): recorded, and answered as a client would.
+                    _notifications.Enqueue(message);
+                    await SendBodyAsync($"{{\"jsonrpc\":\"2.0\",\"id\":{message["id"]!.ToJsonString()},\"result\":null}}");
+                    continue;
+                }
                 string key = message["id"]?.ToJsonString() ?? "null";
                 if (_pending.TryRemove(key, out var waiter)) waiter.TrySetResult(message);
                 else _unmatched.Add(message);
