@@ -45,19 +45,20 @@ public static class LanguageServerHost
         rpc.StartListening();
         var finished = await Task.WhenAny(rpc.Completion, context.State.Exited).ConfigureAwait(false);
         if (finished == rpc.Completion && rpc.Completion.Exception is { } e)
-            serverLog.Error("connection ended: " + e.GetBaseException().Message);
+            serverLog.Error(ServerMessages.ConnectionEnded(e.GetBaseException().Message));
         return context.State.Exited.IsCompleted ? await context.State.Exited.ConfigureAwait(false) : (context.State.Phase == SessionPhase.ShutDown ? 0 : 1);
     }
 
     private static void Register(JsonRpc rpc, ServerContext context)
     {
         Request(rpc, context, new InitializeHandler(context));
-        Notification(rpc, context, new InitializedHandler());
+        Notification(rpc, context, new InitializedHandler(context));
         Notification(rpc, context, new DidOpenHandler(context));
         Notification(rpc, context, new DidChangeHandler(context));
         Notification(rpc, context, new DidCloseHandler(context));
         Notification(rpc, context, new DidSaveHandler(context));
         Notification(rpc, context, new DidChangeConfigurationHandler(context));
+        Notification(rpc, context, new DidChangeWatchedFilesHandler(context));
         Request(rpc, context, new HoverHandler(context));
         Request(rpc, context, new CompletionHandler(context));
         Request(rpc, context, new SignatureHelpHandler(context));

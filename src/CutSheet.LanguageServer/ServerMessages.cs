@@ -10,6 +10,16 @@ public static class ServerMessages
     public const string BadMessage = "the message is not valid JSON-RPC and was dropped";
     public const string InternalError = "the request failed inside the server; the details are in the server's log";
 
+    public static string MissingParams(string method) => $"{method} needs its parameters";
+
+    public static string NotificationWithoutParams(string method) => $"{method} arrived without parameters and was ignored";
+
+    public static string NotSent(string method, string reason) => $"could not send {method}: {reason}";
+
+    public static string NotAnswered(string method, string reason) => $"{method} was not answered: {reason}";
+
+    public static string ConnectionEnded(string reason) => $"the connection ended: {reason}";
+
     public static string InvalidParams(string method, string detail) => $"the parameters of {method} do not fit: {detail}";
 
     public static string UnknownDocument(string uri) => $"the document {uri} is not open";

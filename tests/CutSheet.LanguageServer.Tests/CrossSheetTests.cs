@@ -73,6 +73,28 @@ public sealed class CrossSheetTests
     }
 
     [Fact]
+    public async Task A_sheet_changed_on_disk_refreshes_its_open_importer()
+    {
+        await using var client = new RawLspClient();
+        await client.InitializeAsync(capabilities: new { workspace = new { didChangeWatchedFiles = new { dynamicRegistration = true } } });
+        await client.NotifyAsync("initialized", new { });
+        for (int i = 0; i < 200 && !client.Notifications.Any(n => (string?)n["method"] == "client/registerCapability"); i++) await Task.Delay(10);
+        var registration = client.Notifications.Single(n => (string?)n["method"] == "client/registerCapability");
+        Assert.Equal("**/*.cutsheet", (string?)registration["params"]!["registrations"]![0]!["registerOptions"]!["watchers"]![0]!["globPattern"]);
+
+        string importer = Sheets.TempUri("importer.cutsheet");
+        string shared = new Uri(new Uri(importer), "shared.cutsheet").LocalPath;
+        File.WriteAllText(shared, Shared);
+        await client.NotifyAsync("textDocument/didOpen", Sheets.Open(importer, Importer));
+        await client.DiagnosticsAsync(importer, p => p["diagnostics"]!.AsArray().Count == 0);
+
+        File.WriteAllText(shared, "P_h = 9 mm/rev\n");
+        await client.NotifyAsync("workspace/didChangeWatchedFiles", new { changes = new[] { new { uri = new Uri(shared).AbsoluteUri, type = 2 } } });
+        var failed = await client.DiagnosticsAsync(importer, p => p["diagnostics"]!.AsArray().Count > 0);
+        Assert.Equal("CUT4001", (string?)failed["diagnostics"]![0]!["code"]);
+    }
+
+    [Fact]
     public async Task Definition_into_a_library_sheet_opens_a_read_only_file()
     {
         await using var client = new RawLspClient();

@@ -13,6 +13,7 @@ public sealed class OpenDocument(string uri, string? path)
     private readonly Lock _gate = new();
     private CancellationTokenSource _evaluation = new();
     private Task<SheetAnalysis> _latest = Task.FromCanceled<SheetAnalysis>(new CancellationToken(true));
+    private SheetAnalysis? _lastFinished;
 
     public string Uri { get; } = uri;
 
@@ -36,7 +37,7 @@ public sealed class OpenDocument(string uri, string? path)
         }
     }
 
-    /// <summary>Starts re-evaluating the current version (after a change here or in a sheet it imports).</summary>
+    /// <summary>Starts over on the current version (after a change in a sheet it imports).</summary>
     public CancellationToken Restart()
     {
         lock (_gate) return Update(Text.Text, Version);
@@ -67,27 +68,25 @@ public sealed class OpenDocument(string uri, string? path)
         }
     }
 
-    /// <summary>The last finished evaluation, if any (for cross-document work that must not wait).</summary>
+    /// <summary>The last evaluation that finished, for work across sheets that must not wait (null before the first).</summary>
     public SheetAnalysis? Finished
     {
         get
         {
-            lock (_gate) return _latest.IsCompletedSuccessfully ? _latest.Result : _lastGood;
+            lock (_gate) return _lastFinished;
         }
     }
 
-    private SheetAnalysis? _lastGood;
-
     public void Remember(SheetAnalysis analysis)
     {
-        lock (_gate) _lastGood = analysis;
+        lock (_gate)
+        {
+            if (_lastFinished is null || analysis.Version >= _lastFinished.Version) _lastFinished = analysis;
+        }
     }
 
     public void Close()
     {
-        lock (_gate)
-        {
-            _evaluation.Cancel();
-        }
+        lock (_gate) _evaluation.Cancel();
     }
 }

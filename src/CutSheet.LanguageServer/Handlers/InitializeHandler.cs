@@ -18,6 +18,7 @@ public sealed class InitializeHandler(ServerContext context) : IRequestHandler<I
         state.Settings = state.Settings.Merge(p.InitializationOptions);
         state.ClientRefreshesHints = p.Capabilities?.Workspace?.InlayHint?.RefreshSupport == true;
         state.ClientRefreshesLenses = p.Capabilities?.Workspace?.CodeLens?.RefreshSupport == true;
+        state.ClientWatchesFiles = p.Capabilities?.Workspace?.DidChangeWatchedFiles?.DynamicRegistration == true;
         string? rootUri = p.WorkspaceFolders?.FirstOrDefault()?.Uri ?? p.RootUri;
         state.WorkspaceRoot = rootUri is not null ? DocumentUris.ToPath(rootUri) : p.RootPath;
         state.Phase = SessionPhase.Running;

@@ -3,13 +3,28 @@ using CutSheet.LanguageServer.Server;
 
 namespace CutSheet.LanguageServer.Handlers;
 
-/// <summary><c>initialized</c>: the client is ready; nothing to do until documents open.</summary>
-public sealed class InitializedHandler : INotificationHandler<InitializedParams>
+/// <summary>
+/// <c>initialized</c>: where the client can, ask it to watch sheets on disk, so that a sheet
+/// changed outside the editor re-evaluates the open sheets that import it.
+/// </summary>
+public sealed class InitializedHandler(ServerContext context) : INotificationHandler<InitializedParams>
 {
     public string Method => "initialized";
 
     public void Handle(InitializedParams parameters)
     {
-        // The server pushes nothing unprompted: diagnostics follow didOpen.
+        if (!context.State.ClientWatchesFiles) return;
+        context.Scheduler.Client?.Request("client/registerCapability", new RegistrationParams
+        {
+            Registrations =
+            [
+                new Registration
+                {
+                    Id = "cutsheet-sheets-on-disk",
+                    Method = "workspace/didChangeWatchedFiles",
+                    RegisterOptions = new DidChangeWatchedFilesRegistrationOptions { Watchers = [new Protocol.FileSystemWatcher { GlobPattern = "**/*.cutsheet" }] },
+                },
+            ],
+        });
     }
 }

@@ -40,6 +40,8 @@ namespace CutSheet.LanguageServer.Protocol;
 [JsonSerializable(typeof(CodeLens[]))]
 [JsonSerializable(typeof(PublishDiagnosticsParams))]
 [JsonSerializable(typeof(LogMessageParams))]
+[JsonSerializable(typeof(RegistrationParams))]
+[JsonSerializable(typeof(DidChangeWatchedFilesParams))]
 [JsonSerializable(typeof(object))]
 [JsonSerializable(typeof(StreamJsonRpc.Protocol.CommonErrorData))]
 [JsonSerializable(typeof(StreamJsonRpc.RequestId))]

@@ -5,4 +5,5 @@ public sealed class WorkspaceClientCapabilities
 {
     public RefreshCapability? InlayHint { get; set; }
     public RefreshCapability? CodeLens { get; set; }
+    public DynamicRegistrationCapability? DidChangeWatchedFiles { get; set; }
 }

@@ -8,17 +8,17 @@ public sealed class ClientChannel(JsonRpc rpc, TextWriter stderr)
     public void Notify(string method, object parameters) => _ = NotifyAsync(method, parameters);
 
     /// <summary>Sends a request without parameters (the refresh requests) and does not wait for or need its answer.</summary>
-    public void Request(string method) => _ = RequestAsync(method);
+    public void Request(string method, object? parameters = null) => _ = RequestAsync(method, parameters);
 
-    private async Task RequestAsync(string method)
+    private async Task RequestAsync(string method, object? parameters)
     {
         try
         {
-            await rpc.InvokeWithParameterObjectAsync(method, null).ConfigureAwait(false);
+            await rpc.InvokeWithParameterObjectAsync(method, parameters).ConfigureAwait(false);
         }
         catch (Exception e) when (e is RemoteInvocationException or ConnectionLostException or ObjectDisposedException or IOException or OperationCanceledException)
         {
-            await stderr.WriteLineAsync($"[cutsheet warning] {method} was not answered: {e.Message}").ConfigureAwait(false);
+            await stderr.WriteLineAsync("[cutsheet warning] " + ServerMessages.NotAnswered(method, e.Message)).ConfigureAwait(false);
         }
     }
 
@@ -31,7 +31,7 @@ public sealed class ClientChannel(JsonRpc rpc, TextWriter stderr)
         }
         catch (Exception e) when (e is ConnectionLostException or ObjectDisposedException or IOException or OperationCanceledException)
         {
-            await stderr.WriteLineAsync($"[cutsheet warning] could not send {method}: {e.Message}").ConfigureAwait(false);
+            await stderr.WriteLineAsync("[cutsheet warning] " + ServerMessages.NotSent(method, e.Message)).ConfigureAwait(false);
         }
     }
 }

@@ -14,7 +14,7 @@ public sealed class NotificationGuard<TParams>(INotificationHandler<TParams> han
         if (state.Phase == SessionPhase.Created && Method != "exit") return;
         if (parameters is null)
         {
-            log.Warning($"{Method} arrived without parameters and was ignored");
+            log.Warning(ServerMessages.NotificationWithoutParams(Method));
             return;
         }
         try

@@ -17,7 +17,7 @@ public sealed class RequestGuard<TParams, TResult>(IRequestHandler<TParams, TRes
     public async Task<TResult?> InvokeAsync(TParams parameters, CancellationToken cancellation)
     {
         Admit(Method, state);
-        if (parameters is null) throw Answer(ErrorCodes.InvalidParams, $"{Method} needs its parameters");
+        if (parameters is null) throw Answer(ErrorCodes.InvalidParams, ServerMessages.MissingParams(Method));
         try
         {
             return await handler.HandleAsync(parameters, cancellation).ConfigureAwait(false);

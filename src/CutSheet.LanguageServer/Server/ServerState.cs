@@ -21,6 +21,9 @@ public sealed class ServerState
     /// <summary>The client accepts <c>workspace/inlayHint/refresh</c> (hints of a sheet change when a sheet it imports does).</summary>
     public bool ClientRefreshesHints { get; set; }
 
+    /// <summary>The client watches files for the server when asked at run time.</summary>
+    public bool ClientWatchesFiles { get; set; }
+
     /// <summary>The client accepts <c>workspace/codeLens/refresh</c>.</summary>
     public bool ClientRefreshesLenses { get; set; }
 
