@@ -61,6 +61,24 @@ public sealed class SessionTests
     }
 
     [Fact]
+    public async Task A_request_waiting_on_a_document_that_closes_is_answered()
+    {
+        await using var client = new RawLspClient();
+        await client.StartAsync();
+        string uri = Sheets.TempUri("closing.cutsheet");
+        var text = new System.Text.StringBuilder();
+        for (int i = 0; i < 40000; i++) text.Append("x_").Append(i).Append(" = ").Append(i).Append(" mm\n");
+        await client.NotifyAsync("textDocument/didOpen", Sheets.Open(uri, text.ToString()));
+        var (_, answer) = await client.StartRequestAsync("textDocument/foldingRange", Sheets.Document(uri));
+        await client.NotifyAsync("textDocument/didClose", Sheets.Document(uri));
+        var result = await answer.WaitAsync(TimeSpan.FromSeconds(30));
+        // Either the evaluation finished first, or the request learns that the document is gone.
+        if (result["error"] is { } error) Assert.Equal(-32602, (int?)error["code"]);
+        var cleared = await client.DiagnosticsAsync(uri, p => p["version"] is null);
+        Assert.Empty(cleared["diagnostics"]!.AsArray());
+    }
+
+    [Fact]
     public async Task Settings_turn_hints_off_and_lenses_on()
     {
         await using var client = new RawLspClient();

@@ -14,6 +14,7 @@ public sealed class OpenDocument(string uri, string? path)
     private CancellationTokenSource _evaluation = new();
     private Task<SheetAnalysis> _latest = Task.FromCanceled<SheetAnalysis>(new CancellationToken(true));
     private SheetAnalysis? _lastFinished;
+    private bool _closed;
 
     public string Uri { get; } = uri;
 
@@ -55,7 +56,12 @@ public sealed class OpenDocument(string uri, string? path)
         {
             cancellation.ThrowIfCancellationRequested();
             Task<SheetAnalysis> current;
-            lock (_gate) current = _latest;
+            lock (_gate)
+            {
+                // A closed document has no newer version to wait for.
+                if (_closed) throw new Server.RequestFailure(Protocol.ErrorCodes.InvalidParams, ServerMessages.UnknownDocument(Uri));
+                current = _latest;
+            }
             try
             {
                 return await current.WaitAsync(cancellation).ConfigureAwait(false);
@@ -87,6 +93,10 @@ public sealed class OpenDocument(string uri, string? path)
 
     public void Close()
     {
-        lock (_gate) _evaluation.Cancel();
+        lock (_gate)
+        {
+            _closed = true;
+            _evaluation.Cancel();
+        }
     }
 }
