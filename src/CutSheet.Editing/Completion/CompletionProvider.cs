@@ -27,7 +27,24 @@ public static class CompletionProvider
         "m/min", "m/s", "s", "min", "h", "kW", "W", "hp", "kg", "lb", "MPa", "N/mm²", "psi", "GPa", "deg", "°", "rad", "Hz", "%",
     ];
 
-    public static CompletionResult Complete(SheetAnalysis analysis, int offset)
+    /// <summary>
+    /// Completions at <paramref name="offset"/>. <paramref name="trigger"/> is the character whose
+    /// typing asked for them (null when asked for by hand): a space asks only for units after a
+    /// number or <c>as</c>, a dot only for an imported sheet's names, so typing stays quiet elsewhere.
+    /// </summary>
+    public static CompletionResult Complete(SheetAnalysis analysis, int offset, string? trigger = null)
+    {
+        var result = Complete(analysis, offset);
+        bool wanted = trigger switch
+        {
+            " " => result.Items.Count > 0 && result.Items[0].Category == CompletionCategory.Unit,
+            "." => result.Items.Count > 0 && result.Items[0].Category != CompletionCategory.Unit && result.Items[0].Replace.Start > 0 && analysis.Text[result.Items[0].Replace.Start - 1] == '.',
+            _ => true,
+        };
+        return wanted ? result : CompletionResult.Empty;
+    }
+
+    private static CompletionResult Complete(SheetAnalysis analysis, int offset)
     {
         offset = Math.Clamp(offset, 0, analysis.Text.Length);
         var source = analysis.Source;

@@ -12,7 +12,7 @@ public sealed class CompletionHandler(ServerContext context) : IRequestHandler<C
     public async Task<CompletionList?> HandleAsync(CompletionParams p, CancellationToken cancellation)
     {
         var (_, analysis) = await context.AnalysisAsync(p.TextDocument.Uri, cancellation).ConfigureAwait(false);
-        var result = CompletionProvider.Complete(analysis, context.Positions.ToOffset(analysis.Source, p.Position));
+        var result = CompletionProvider.Complete(analysis, context.Positions.ToOffset(analysis.Source, p.Position), p.Context?.TriggerCharacter);
         return new CompletionList
         {
             IsIncomplete = result.IsIncomplete,

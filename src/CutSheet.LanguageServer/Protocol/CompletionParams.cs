@@ -5,4 +5,5 @@ public sealed class CompletionParams
 {
     public TextDocumentIdentifier TextDocument { get; set; } = new();
     public Position Position { get; set; } = new();
+    public CompletionContext? Context { get; set; }
 }
