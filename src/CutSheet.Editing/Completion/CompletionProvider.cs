@@ -66,6 +66,7 @@ public static class CompletionProvider
         int wordStart = offset;
         while (wordStart > lineStart && IsNameChar(analysis.Text[wordStart - 1])) wordStart--;
         var replace = TextSpan.FromBounds(wordStart, offset);
+        if (IsKindPlace(analysis.Text[lineStart..wordStart])) return new CompletionResult(KindNames(analysis, replace).ToList(), false);
         if (wordStart > lineStart && analysis.Text[wordStart - 1] == '.')
         {
             int qualifierEnd = wordStart - 1, qualifierStart = qualifierEnd;
@@ -140,7 +141,9 @@ public static class CompletionProvider
             foreach (var l in f.Clauses.Locals)
                 if (seen.Add(l.Name)) yield return new CompletionEntry(l.Name, CompletionCategory.Definition, l.Name, replace, SortText: "0" + l.Name);
         }
-        foreach (var e in Symbols(scope.OwnSymbols(), replace, digits, analysis))
+        // The definition being written is not offered to itself.
+        var own = scope.OwnSymbols().Where(s => !(s.Symbol is DefinitionSymbol d && d.Path == analysis.Path && d.Syntax.Span.ContainsOrTouches(offset)));
+        foreach (var e in Symbols(own, replace, digits, analysis))
             if (seen.Add(e.Label)) yield return e;
         foreach (var e in Symbols(scope.Imported.Select(i => (i.Key, i.Value.Symbol)), replace, digits))
             if (seen.Add(e.Label)) yield return e;
@@ -170,6 +173,29 @@ public static class CompletionProvider
                 _ => new CompletionEntry(name, CompletionCategory.Kind, name, replace, Detail: "kind", SortText: "1" + name),
             };
         }
+    }
+
+    /// <summary>
+    /// After a ':' in a function's head (before the line's first '='): a parameter's or the
+    /// return's kind. A ':' after the '=' belongs to a named argument and is left to names.
+    /// </summary>
+    private static bool IsKindPlace(string before)
+    {
+        string trimmed = before.TrimEnd();
+        return trimmed.EndsWith(':') && !trimmed.Contains('=') && trimmed.Contains('(');
+    }
+
+    private static IEnumerable<CompletionEntry> KindNames(SheetAnalysis analysis, TextSpan replace)
+    {
+        var scope = analysis.Result.Scope;
+        foreach (var k in scope.Kinds.Values)
+            yield return new CompletionEntry(k.Name, CompletionCategory.Kind, k.Name, replace, Detail: k.Description, SortText: "0" + k.Name);
+        foreach (var c in scope.Choices.Values)
+            yield return new CompletionEntry(c.Name, CompletionCategory.Choice, c.Name, replace, Detail: "choice", SortText: "0" + c.Name);
+        foreach (var k in Kinds.Builtin.Where(k => k.AmbiguousWith is null))
+            yield return new CompletionEntry(k.Name, CompletionCategory.Kind, k.Name, replace, Detail: k.Description, SortText: "1" + k.Name);
+        foreach (var word in new[] { "number", "list", "boolean" })
+            yield return new CompletionEntry(word, CompletionCategory.Kind, word, replace, SortText: "2" + word);
     }
 
     private static string? DefinitionValue(DefinitionSymbol d, int digits, SheetAnalysis? own)
