@@ -142,7 +142,9 @@ public static class CompletionProvider
                 if (seen.Add(l.Name)) yield return new CompletionEntry(l.Name, CompletionCategory.Definition, l.Name, replace, SortText: "0" + l.Name);
         }
         // The definition being written is not offered to itself.
-        var own = scope.OwnSymbols().Where(s => !(s.Symbol is DefinitionSymbol d && d.Path == analysis.Path && d.Syntax.Span.ContainsOrTouches(offset)));
+        bool Writing(DefinitionSymbol d) => d.Path == analysis.Path && d.Syntax.Span.Start <= offset
+            && offset <= analysis.Source.LineEnd(analysis.Source.GetPosition(d.Syntax.Span.End).Line);
+        var own = scope.OwnSymbols().Where(s => !(s.Symbol is DefinitionSymbol d && Writing(d)));
         foreach (var e in Symbols(own, replace, digits, analysis))
             if (seen.Add(e.Label)) yield return e;
         foreach (var e in Symbols(scope.Imported.Select(i => (i.Key, i.Value.Symbol)), replace, digits))
