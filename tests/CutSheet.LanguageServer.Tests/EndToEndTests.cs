@@ -30,6 +30,23 @@ public sealed class EndToEndTests
         Assert.Contains("# fail 0", suite.Output);
     }
 
+    /// <summary>
+    /// A second real client: Neovim 0.7 headless (Debian's package, installed by .ci/run) runs the
+    /// configuration documented in docs/editors.md — diagnostics, hover, edit and code lenses.
+    /// Fails, rather than skips, when nvim is missing.
+    /// </summary>
+    [Fact]
+    public void Neovim_with_the_documented_configuration_passes()
+    {
+        string dll = Path.Combine(AppContext.BaseDirectory, "cutsheet.dll");
+        string script = Path.Combine(SuiteFolder(), "neovim", "check.sh");
+        var probe = Run("bash", ["-c", "command -v nvim"], SuiteFolder(), dll, TimeSpan.FromSeconds(10));
+        Assert.True(probe.Code == 0, "Neovim is not installed: apt-get install neovim (.ci/run installs it)");
+        var check = Run("bash", [script, dll], SuiteFolder(), dll, TimeSpan.FromMinutes(2));
+        Assert.True(check.Code == 0, $"the Neovim check failed ({check.Code}):\n{check.Output}");
+        Assert.Contains("neovim check passed", check.Output);
+    }
+
     private static (int Code, string Output) Run(string program, string[] args, string folder, string dll, TimeSpan timeout)
     {
         var start = new ProcessStartInfo(program) { WorkingDirectory = folder, RedirectStandardOutput = true, RedirectStandardError = true };
