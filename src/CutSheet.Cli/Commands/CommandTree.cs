@@ -32,6 +32,8 @@ internal static class CommandTree
         var check = CheckCommand.Create(host);
         root.Subcommands.Add(run);
         root.Subcommands.Add(check);
+        var lsp = LspCommand.Create();
+        root.Subcommands.Add(lsp);
 
         var help = root.Options.OfType<HelpOption>().Single();
         help.Action = new HelpWithDetailsAction((HelpAction)help.Action!, new Dictionary<Command, string>
@@ -39,6 +41,7 @@ internal static class CommandTree
             [root] = RootDetails,
             [run] = RunCommand.Details,
             [check] = CheckCommand.Details,
+            [lsp] = LspCommand.Details,
         });
 
         root.SetAction(NoCommand);

@@ -1,0 +1,65 @@
+using System.Diagnostics;
+using System.Runtime.CompilerServices;
+
+namespace CutSheet.LanguageServer.Tests;
+
+/// <summary>
+/// Runs the Node end-to-end suite (tests/lsp-e2e: the real LSP client library against the real
+/// <c>cutsheet lsp</c> process) so that <c>dotnet test CutSheet.sln</c> runs everything. The
+/// server is the <c>cutsheet.dll</c> built next to these tests. Needs node and npm on PATH;
+/// <c>npm ci</c> runs first when node_modules is missing.
+/// </summary>
+public sealed class EndToEndTests
+{
+    private static string SuiteFolder([CallerFilePath] string here = "") =>
+        Path.GetFullPath(Path.Combine(Path.GetDirectoryName(here)!, "..", "lsp-e2e"));
+
+    [Fact]
+    public void Node_suite_with_the_real_client_passes()
+    {
+        string folder = SuiteFolder();
+        string dll = Path.Combine(AppContext.BaseDirectory, "cutsheet.dll");
+        Assert.True(File.Exists(dll), $"the server is not built next to the tests: {dll}");
+        if (!Directory.Exists(Path.Combine(folder, "node_modules")))
+        {
+            var install = Run("npm", ["ci", "--no-audit", "--no-fund"], folder, dll, TimeSpan.FromMinutes(5));
+            Assert.True(install.Code == 0, $"npm ci failed ({install.Code}):\n{install.Output}");
+        }
+        var suite = Run("node", ["--test", "--test-concurrency=1", "."], folder, dll, TimeSpan.FromMinutes(3));
+        Assert.True(suite.Code == 0, $"node --test failed ({suite.Code}):\n{suite.Output}");
+        Assert.Contains("# fail 0", suite.Output);
+    }
+
+    /// <summary>
+    /// A second real client: Neovim 0.7 headless (Debian's package, installed by .ci/run) runs the
+    /// configuration documented in docs/editors.md — diagnostics, hover, edit and code lenses.
+    /// Fails, rather than skips, when nvim is missing.
+    /// </summary>
+    [Fact]
+    public void Neovim_with_the_documented_configuration_passes()
+    {
+        string dll = Path.Combine(AppContext.BaseDirectory, "cutsheet.dll");
+        string script = Path.Combine(SuiteFolder(), "neovim", "check.sh");
+        var probe = Run("bash", ["-c", "command -v nvim"], SuiteFolder(), dll, TimeSpan.FromSeconds(10));
+        Assert.True(probe.Code == 0, "Neovim is not installed: apt-get install neovim (.ci/run installs it)");
+        var check = Run("bash", [script, dll], SuiteFolder(), dll, TimeSpan.FromMinutes(2));
+        Assert.True(check.Code == 0, $"the Neovim check failed ({check.Code}):\n{check.Output}");
+        Assert.Contains("neovim check passed", check.Output);
+    }
+
+    private static (int Code, string Output) Run(string program, string[] args, string folder, string dll, TimeSpan timeout)
+    {
+        var start = new ProcessStartInfo(program) { WorkingDirectory = folder, RedirectStandardOutput = true, RedirectStandardError = true };
+        foreach (var a in args) start.ArgumentList.Add(a);
+        start.Environment["CUTSHEET_DLL"] = dll;
+        using var process = Process.Start(start)!;
+        var stdout = process.StandardOutput.ReadToEndAsync();
+        var stderr = process.StandardError.ReadToEndAsync();
+        if (!process.WaitForExit(timeout))
+        {
+            process.Kill(entireProcessTree: true);
+            return (-1, $"timed out after {timeout}\n{stdout.Result}\n{stderr.Result}");
+        }
+        return (process.ExitCode, stdout.Result + "\n" + stderr.Result);
+    }
+}
