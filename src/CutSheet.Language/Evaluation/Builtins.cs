@@ -50,7 +50,9 @@ internal static class Builtins
 
     public static IEnumerable<string> FunctionNames => Functions.Select(f => f.Name);
 
-    public static bool IsFunction(string name) => Array.Exists(Functions, f => f.Name == name);
+    private static readonly HashSet<string> FunctionSet = new(Functions.Select(f => f.Name), StringComparer.Ordinal);
+
+    public static bool IsFunction(string name) => FunctionSet.Contains(name);
 
     public static Value Call(string name, Value[] args, CallSyntax call, out (string Code, TextSpan Span, string Message)? problem)
     {

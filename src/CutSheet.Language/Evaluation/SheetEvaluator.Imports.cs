@@ -1,6 +1,7 @@
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Library;
 using CutSheet.Language.Semantics;
+using CutSheet.Language.Syntax;
 using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Text;
 
@@ -17,16 +18,16 @@ internal sealed partial class SheetEvaluator
             var frame = new EvalFrame { Scope = _scope, CallSite = use.Span };
             foreach (var o in use.Overrides) overrides[o.Name] = _eval.Evaluate(o.Value, frame);
             string key;
-            string? text;
+            SheetSyntax? syntax;
             string path;
             string label;
             if (!use.IsPath)
             {
-                text = LibrarySheets.Read(use.Target);
+                syntax = LibrarySheets.Syntax(use.Target);
                 path = LibrarySheets.PathOf(use.Target);
                 label = use.Target;
                 key = "library:" + use.Target;
-                if (text is null)
+                if (syntax is null)
                 {
                     var suggestion = ExpressionEvaluator.Suggest(use.Target, LibrarySheets.Names);
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan,
@@ -38,7 +39,7 @@ internal sealed partial class SheetEvaluator
             else
             {
                 if (!ResolveWorkspacePath(use, out path)) continue;
-                text = _options.Sources.Read(path);
+                var text = _options.Sources.Read(path);
                 label = use.Target;
                 key = path;
                 if (text is null)
@@ -46,6 +47,7 @@ internal sealed partial class SheetEvaluator
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.ImportNotFound(use.Target)));
                     continue;
                 }
+                syntax = SheetSyntax.Parse(new SourceText(text, path));
                 _importNames.Add(path);
             }
 
@@ -68,7 +70,7 @@ internal sealed partial class SheetEvaluator
                 try
                 {
                     var importOptions = _options with { Overrides = new Dictionary<string, string>() };
-                    loaded = EvaluateScope(new SourceText(text, path), importOptions, _imports, overrides, label);
+                    loaded = EvaluateScope(syntax, importOptions, _imports, overrides, label);
                 }
                 finally
                 {

@@ -44,9 +44,12 @@ internal sealed partial class SheetEvaluator
         EvaluateScope(source, options, imports, new Dictionary<string, Value>(), source.Path ?? "this sheet").Result;
 
     internal static (SheetScope Scope, SheetResult Result) EvaluateScope(SourceText source, RunOptions options, ImportContext imports,
+        IReadOnlyDictionary<string, Value> importOverrides, string displayName) =>
+        EvaluateScope(SheetSyntax.Parse(source), options, imports, importOverrides, displayName);
+
+    internal static (SheetScope Scope, SheetResult Result) EvaluateScope(SheetSyntax syntax, RunOptions options, ImportContext imports,
         IReadOnlyDictionary<string, Value> importOverrides, string displayName)
     {
-        var syntax = SheetSyntax.Parse(source);
         var evaluator = new SheetEvaluator(syntax, options, imports, importOverrides, displayName);
         var result = evaluator.Run();
         return (evaluator._scope, result);

@@ -22,6 +22,15 @@ public static class LibrarySheets
         .OrderBy(n => n, StringComparer.Ordinal)
         .ToArray();
 
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, Syntax.SheetSyntax?> Parsed = new(StringComparer.Ordinal);
+
+    /// <summary>
+    /// The parsed library sheet, parsed once per process: syntax is immutable and the sheets ship
+    /// with the tool, so every <c>use</c> of a library sheet shares one tree.
+    /// </summary>
+    public static Syntax.SheetSyntax? Syntax(string name) =>
+        Parsed.GetOrAdd(name, n => Read(n) is { } text ? CutSheet.Language.Syntax.SheetSyntax.Parse(text, PathOf(n)) : null);
+
     public static string? Read(string name)
     {
         using var stream = typeof(LibrarySheets).Assembly.GetManifestResourceStream(ResourcePrefix + name + ".cutsheet");

@@ -14,10 +14,10 @@ namespace CutSheet.Language.Syntax.Parsing;
 internal static class ExpressionGrammar
 {
     public static readonly TokenListParser<TokenKind, UnitSyntax> Unit =
-        Token.EqualTo(TokenKind.Unit).Select(t => new UnitSyntax(t.ToStringValue(), Of(t)));
+        TokenParsers.Of(TokenKind.Unit).Select(t => new UnitSyntax(t.ToStringValue(), Of(t)));
 
     public static readonly TokenListParser<TokenKind, TextValueSyntax> Text =
-        Token.EqualTo(TokenKind.String).Select(t => new TextValueSyntax(StringText.Value(t.ToStringValue()), Of(t)));
+        TokenParsers.Of(TokenKind.String).Select(t => new TextValueSyntax(StringText.Value(t.ToStringValue()), Of(t)));
 
     /// <summary>Optional quoted text (null when absent).</summary>
     public static readonly TokenListParser<TokenKind, TextValueSyntax?> OptionalText =
@@ -26,9 +26,11 @@ internal static class ExpressionGrammar
     /// <summary>A full expression, with an optional trailing <c>as UNIT</c>.</summary>
     public static readonly TokenListParser<TokenKind, ExpressionSyntax> Expression = ParseExpression;
 
-    /// <summary>An optional expression (null when absent), e.g. a parameter's default.</summary>
+    private static readonly TokenListParser<TokenKind, ExpressionSyntax?>[] AfterCache = new TokenListParser<TokenKind, ExpressionSyntax?>[(int)TokenKind.KindKeyword + 1];
+
+    /// <summary>An optional expression after a keyword (null when absent), e.g. a parameter's default; built once per keyword.</summary>
     public static TokenListParser<TokenKind, ExpressionSyntax?> After(TokenKind keyword) =>
-        Token.EqualTo(keyword).IgnoreThen(Expression).Select(e => (ExpressionSyntax?)e).OptionalOrDefault();
+        AfterCache[(int)keyword] ??= TokenParsers.Of(keyword).IgnoreThen(Expression).Select(e => (ExpressionSyntax?)e).OptionalOrDefault();
 
     private static TokenListParserResult<TokenKind, ExpressionSyntax> ParseExpression(TokenList<TokenKind> input)
     {

@@ -18,47 +18,51 @@ internal static class StatementGrammar
     private static readonly TokenListParser<TokenKind, ExpressionSyntax> Expr = ExpressionGrammar.Expression;
 
     private static readonly TokenListParser<TokenKind, LocalDefinitionSyntax> Binding =
-        from name in Token.EqualTo(TokenKind.Identifier)
-        from eq in Token.EqualTo(TokenKind.Equals)
+        from name in TokenParsers.Of(TokenKind.Identifier)
+        from eq in TokenParsers.Of(TokenKind.Equals)
         from value in Expr
         select new LocalDefinitionSyntax(Of(name).Cover(value.Span), name.ToStringValue(), Of(name), value);
 
     private static readonly TokenListParser<TokenKind, CautionLevel> Level =
-        Token.EqualTo(TokenKind.Notice).Value(CautionLevel.Notice)
-            .Or(Token.EqualTo(TokenKind.Caution).Value(CautionLevel.Caution))
-            .Or(Token.EqualTo(TokenKind.Warning).Value(CautionLevel.Warning));
+        TokenParsers.Of(TokenKind.Notice).Value(CautionLevel.Notice)
+            .Or(TokenParsers.Of(TokenKind.Caution).Value(CautionLevel.Caution))
+            .Or(TokenParsers.Of(TokenKind.Warning).Value(CautionLevel.Warning));
 
     public static readonly TokenListParser<TokenKind, CautionSyntax> CautionBody =
-        from first in Token.EqualTo(TokenKind.Notice).Or(Token.EqualTo(TokenKind.Caution)).Or(Token.EqualTo(TokenKind.Warning))
+        from first in TokenParsers.Of(TokenKind.Notice).Or(TokenParsers.Of(TokenKind.Caution)).Or(TokenParsers.Of(TokenKind.Warning))
         from message in ExpressionGrammar.Text
-        from when in Token.EqualTo(TokenKind.When)
+        from when in TokenParsers.Of(TokenKind.When)
         from condition in Expr
         select new CautionSyntax(Of(first).Cover(condition.Span), LevelOf(first.Kind), message, condition);
 
+    private static readonly TokenListParser<TokenKind, (ExpressionSyntax? low, ExpressionSyntax? high)> Range =
+        (from f in TokenParsers.Of(TokenKind.From) from low in Expr from t in TokenParsers.Of(TokenKind.To) from high in Expr
+         select ((ExpressionSyntax?)low, (ExpressionSyntax?)high)).OptionalOrDefault();
+
     private static readonly TokenListParser<TokenKind, TableCellSyntax> Cell =
-        from column in Token.EqualTo(TokenKind.Identifier)
-        from eq in Token.EqualTo(TokenKind.Equals)
+        from column in TokenParsers.Of(TokenKind.Identifier)
+        from eq in TokenParsers.Of(TokenKind.Equals)
         from value in Expr
-        from range in (from f in Token.EqualTo(TokenKind.From) from low in Expr from t in Token.EqualTo(TokenKind.To) from high in Expr select (low, high)).OptionalOrDefault()
+        from range in Range
         select new TableCellSyntax(Of(column).Cover(range.high?.Span ?? value.Span), column.ToStringValue(), Of(column), value, range.low, range.high);
 
     private static readonly TokenListParser<TokenKind, TableRowSyntax> Row =
-        from row in Token.EqualTo(TokenKind.Row)
-        from key in Token.EqualTo(TokenKind.Identifier)
-        from colon in Token.EqualTo(TokenKind.Colon)
-        from cells in Cell.AtLeastOnceDelimitedBy(Token.EqualTo(TokenKind.Comma))
-        from source in Token.EqualTo(TokenKind.Source).Where(s => s.Span.Position.Line == row.Span.Position.Line)
+        from row in TokenParsers.Of(TokenKind.Row)
+        from key in TokenParsers.Of(TokenKind.Identifier)
+        from colon in TokenParsers.Of(TokenKind.Colon)
+        from cells in Cell.AtLeastOnceDelimitedBy(TokenParsers.Of(TokenKind.Comma))
+        from source in TokenParsers.Of(TokenKind.Source).Where(s => s.Span.Position.Line == row.Span.Position.Line)
             .IgnoreThen(ExpressionGrammar.Text).Select(t => (TextValueSyntax?)t).Try().OptionalOrDefault()
         select new TableRowSyntax(Of(row).Cover(source?.Span ?? cells[^1].Span), key.ToStringValue(), Of(key), cells, source);
 
     private static readonly TokenListParser<TokenKind, (string Keyword, TextSpan Span, object? Node)> Clause =
-        Token.EqualTo(TokenKind.Assumed).Select(t => ("assumed", Of(t), (object?)null))
-            .Or(from t in Token.EqualTo(TokenKind.Source) from s in ExpressionGrammar.Text select ("source", Of(t), (object?)s))
-            .Or(from t in Token.EqualTo(TokenKind.Accepted) from s in ExpressionGrammar.Text select ("accepted", Of(t), (object?)s))
-            .Or(from t in Token.EqualTo(TokenKind.Where) from b in Binding select ("where", Of(t), (object?)b))
-            .Or(from t in Token.EqualTo(TokenKind.Valid) from c in Expr from m in ExpressionGrammar.OptionalText
+        TokenParsers.Of(TokenKind.Assumed).Select(t => ("assumed", Of(t), (object?)null))
+            .Or(from t in TokenParsers.Of(TokenKind.Source) from s in ExpressionGrammar.Text select ("source", Of(t), (object?)s))
+            .Or(from t in TokenParsers.Of(TokenKind.Accepted) from s in ExpressionGrammar.Text select ("accepted", Of(t), (object?)s))
+            .Or(from t in TokenParsers.Of(TokenKind.Where) from b in Binding select ("where", Of(t), (object?)b))
+            .Or(from t in TokenParsers.Of(TokenKind.Valid) from c in Expr from m in ExpressionGrammar.OptionalText
                 select ("valid", Of(t), (object?)new ConditionClauseSyntax(Of(t).Cover(m?.Span ?? c.Span), c, m)))
-            .Or(from t in Token.EqualTo(TokenKind.Require) from c in Expr from m in ExpressionGrammar.OptionalText
+            .Or(from t in TokenParsers.Of(TokenKind.Require) from c in Expr from m in ExpressionGrammar.OptionalText
                 select ("require", Of(t), (object?)new ConditionClauseSyntax(Of(t).Cover(m?.Span ?? c.Span), c, m)))
             .Or(CautionBody.Select(c => ("caution", c.Span, (object?)c)))
             .Or(Row.Select(r => ("row", TextSpan.FromBounds(r.Span.Start, r.Span.Start + 3), (object?)r)));
@@ -73,21 +77,21 @@ internal static class StatementGrammar
         select (StatementSyntax)new DefinitionSyntax(b.Span, b.Name, b.NameSpan, b.Value) { Clauses = clauses };
 
     private static readonly TokenListParser<TokenKind, ParameterSyntax> Parameter =
-        from name in Token.EqualTo(TokenKind.Identifier)
-        from colon in Token.EqualTo(TokenKind.Colon)
-        from kind in Token.EqualTo(TokenKind.Identifier)
+        from name in TokenParsers.Of(TokenKind.Identifier)
+        from colon in TokenParsers.Of(TokenKind.Colon)
+        from kind in TokenParsers.Of(TokenKind.Identifier)
         from def in ExpressionGrammar.After(TokenKind.Equals)
         select new ParameterSyntax(Of(name).Cover(def?.Span ?? Of(kind)), name.ToStringValue(), Of(name), kind.ToStringValue(), Of(kind), def);
 
     /// <summary>The part of a function before its formula; used alone to recover when the formula does not parse.</summary>
     public static readonly TokenListParser<TokenKind, (Token<TokenKind> Name, ParameterSyntax[] Parameters, Token<TokenKind> Kind)> FunctionHeader =
-        from name in Token.EqualTo(TokenKind.Identifier)
-        from open in Token.EqualTo(TokenKind.LParen)
-        from parameters in Parameter.ManyDelimitedBy(Token.EqualTo(TokenKind.Comma))
-        from close in Token.EqualTo(TokenKind.RParen)
-        from colon in Token.EqualTo(TokenKind.Colon)
-        from kind in Token.EqualTo(TokenKind.Identifier)
-        from eq in Token.EqualTo(TokenKind.Equals)
+        from name in TokenParsers.Of(TokenKind.Identifier)
+        from open in TokenParsers.Of(TokenKind.LParen)
+        from parameters in Parameter.ManyDelimitedBy(TokenParsers.Of(TokenKind.Comma))
+        from close in TokenParsers.Of(TokenKind.RParen)
+        from colon in TokenParsers.Of(TokenKind.Colon)
+        from kind in TokenParsers.Of(TokenKind.Identifier)
+        from eq in TokenParsers.Of(TokenKind.Equals)
         select (name, parameters, kind);
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> Function =
@@ -98,7 +102,7 @@ internal static class StatementGrammar
             header.Parameters, header.Kind.ToStringValue(), Of(header.Kind), body) { Clauses = clauses };
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> Check =
-        from check in Token.EqualTo(TokenKind.Check)
+        from check in TokenParsers.Of(TokenKind.Check)
         from condition in Expr
         from tolerance in ExpressionGrammar.After(TokenKind.Within)
         from clauses in Clauses
@@ -110,58 +114,61 @@ internal static class StatementGrammar
         select (StatementSyntax)(c with { Clauses = clauses });
 
     private static readonly TokenListParser<TokenKind, (string, TextSpan)> Alias =
-        Token.EqualTo(TokenKind.As).IgnoreThen(Token.EqualTo(TokenKind.Identifier).Or(Token.EqualTo(TokenKind.Unit)))
+        TokenParsers.Of(TokenKind.As).IgnoreThen(TokenParsers.Of(TokenKind.Identifier).Or(TokenParsers.Of(TokenKind.Unit)))
             .Select(t => (t.ToStringValue(), Of(t)));
 
+    private static readonly TokenListParser<TokenKind, (LocalDefinitionSyntax[] list, TextSpan close)> Overrides =
+        (from w in TokenParsers.Of(TokenKind.With)
+        from open in TokenParsers.Of(TokenKind.LParen)
+        from list in Binding.ManyDelimitedBy(TokenParsers.Of(TokenKind.Comma))
+        from close in TokenParsers.Of(TokenKind.RParen)
+        select (list, Of(close))).OptionalOrDefault();
+
     private static readonly TokenListParser<TokenKind, StatementSyntax> Use =
-        from use in Token.EqualTo(TokenKind.Use)
-        from target in Token.EqualTo(TokenKind.Identifier).Or(Token.EqualTo(TokenKind.String))
+        from use in TokenParsers.Of(TokenKind.Use)
+        from target in TokenParsers.Of(TokenKind.Identifier).Or(TokenParsers.Of(TokenKind.String))
         from alias in Alias.OptionalOrDefault()
-        from overrides in (from w in Token.EqualTo(TokenKind.With)
-                           from open in Token.EqualTo(TokenKind.LParen)
-                           from list in Binding.ManyDelimitedBy(Token.EqualTo(TokenKind.Comma))
-                           from close in Token.EqualTo(TokenKind.RParen)
-                           select (list, Of(close))).OptionalOrDefault()
+        from overrides in Overrides
         select (StatementSyntax)new UseSyntax(
             TextSpan.FromBounds(Of(use).Start, overrides.Item1 is null ? (alias.Item1 is null ? Of(target).End : alias.Item2.End) : overrides.Item2.End),
             target.Kind == TokenKind.String ? StringText.Value(target.ToStringValue()) : target.ToStringValue(),
             target.Kind == TokenKind.String, Of(target), alias.Item1, alias.Item2, overrides.Item1 ?? []);
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> Sheet =
-        from sheet in Token.EqualTo(TokenKind.Sheet)
-        from key in Token.EqualTo(TokenKind.Identifier)
+        from sheet in TokenParsers.Of(TokenKind.Sheet)
+        from key in TokenParsers.Of(TokenKind.Identifier)
         from value in ExpressionGrammar.Text
         select (StatementSyntax)new SheetMetadataSyntax(Of(sheet).Cover(value.Span), key.ToStringValue(), Of(key), value);
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> Display =
-        from display in Token.EqualTo(TokenKind.Display)
-        from setting in Token.EqualTo(TokenKind.Identifier)
-        from value in Token.EqualTo(TokenKind.Identifier).Or(Token.EqualTo(TokenKind.Number)).Or(Token.EqualTo(TokenKind.Unit))
+        from display in TokenParsers.Of(TokenKind.Display)
+        from setting in TokenParsers.Of(TokenKind.Identifier)
+        from value in TokenParsers.Of(TokenKind.Identifier).Or(TokenParsers.Of(TokenKind.Number)).Or(TokenParsers.Of(TokenKind.Unit))
         select (StatementSyntax)new DisplaySyntax(Of(display).Cover(Of(value)), setting.ToStringValue(), Of(setting), value.ToStringValue(), Of(value));
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> Choice =
-        from choice in Token.EqualTo(TokenKind.Choice)
-        from name in Token.EqualTo(TokenKind.Identifier)
-        from eq in Token.EqualTo(TokenKind.Equals)
-        from options in Token.EqualTo(TokenKind.Identifier).AtLeastOnceDelimitedBy(Token.EqualTo(TokenKind.Bar))
+        from choice in TokenParsers.Of(TokenKind.Choice)
+        from name in TokenParsers.Of(TokenKind.Identifier)
+        from eq in TokenParsers.Of(TokenKind.Equals)
+        from options in TokenParsers.Of(TokenKind.Identifier).AtLeastOnceDelimitedBy(TokenParsers.Of(TokenKind.Bar))
         from clauses in Clauses
         select (StatementSyntax)new ChoiceSyntax(Of(choice).Cover(Of(options[^1])), name.ToStringValue(), Of(name),
             options.Select(o => (o.ToStringValue(), Of(o))).ToArray()) { Clauses = clauses };
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> Table =
-        from table in Token.EqualTo(TokenKind.Table)
-        from name in Token.EqualTo(TokenKind.Identifier)
-        from open in Token.EqualTo(TokenKind.LParen)
-        from key in Token.EqualTo(TokenKind.Identifier)
-        from close in Token.EqualTo(TokenKind.RParen)
+        from table in TokenParsers.Of(TokenKind.Table)
+        from name in TokenParsers.Of(TokenKind.Identifier)
+        from open in TokenParsers.Of(TokenKind.LParen)
+        from key in TokenParsers.Of(TokenKind.Identifier)
+        from close in TokenParsers.Of(TokenKind.RParen)
         from clauses in Clauses
         select (StatementSyntax)new TableSyntax(Between(table, close), name.ToStringValue(), Of(name), key.ToStringValue(), Of(key)) { Clauses = clauses };
 
     private static readonly TokenListParser<TokenKind, StatementSyntax> KindDeclaration =
-        from keyword in Token.EqualTo(TokenKind.KindKeyword)
-        from name in Token.EqualTo(TokenKind.Identifier)
-        from eq in Token.EqualTo(TokenKind.Equals)
-        from basis in Token.EqualTo(TokenKind.Identifier)
+        from keyword in TokenParsers.Of(TokenKind.KindKeyword)
+        from name in TokenParsers.Of(TokenKind.Identifier)
+        from eq in TokenParsers.Of(TokenKind.Equals)
+        from basis in TokenParsers.Of(TokenKind.Identifier)
         from clauses in Clauses
         select (StatementSyntax)new KindDeclarationSyntax(Between(keyword, basis), name.ToStringValue(), Of(name), basis.ToStringValue(), Of(basis)) { Clauses = clauses };
 
