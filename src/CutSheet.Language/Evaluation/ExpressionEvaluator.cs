@@ -18,21 +18,19 @@ internal sealed partial class ExpressionEvaluator
     private readonly DiagnosticSink _sink;
     private readonly SheetScope _top;
     private readonly Func<int> _currentLine;
-    private readonly UnitSystem _system;
 
     /// <summary>How many products that contain π are being evaluated around the current one.</summary>
     private int _piProducts;
     private readonly SourceText _source;
     private readonly Func<DefinitionSymbol, int> _lastDependencyLine;
 
-    public ExpressionEvaluator(DiagnosticSink sink, SheetScope top, SourceText source, Func<int> currentLine, Func<DefinitionSymbol, int> lastDependencyLine, UnitSystem system)
+    public ExpressionEvaluator(DiagnosticSink sink, SheetScope top, SourceText source, Func<int> currentLine, Func<DefinitionSymbol, int> lastDependencyLine)
     {
         _source = source;
         _lastDependencyLine = lastDependencyLine;
         _sink = sink;
         _top = top;
         _currentLine = currentLine;
-        _system = system;
     }
 
     public Value Evaluate(ExpressionSyntax e, EvalFrame f) => e switch

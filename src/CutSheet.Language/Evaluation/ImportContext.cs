@@ -7,7 +7,7 @@ namespace CutSheet.Language.Evaluation;
 /// State shared by one evaluation and the imports it pulls in: evaluated imports by path and
 /// overrides (each evaluated once), and the chain of sheets being loaded, to catch cycles.
 /// </summary>
-public sealed class ImportContext
+internal sealed class ImportContext
 {
     internal Dictionary<string, (SheetScope Scope, SheetResult Result)> Cache { get; } = new(StringComparer.Ordinal);
 

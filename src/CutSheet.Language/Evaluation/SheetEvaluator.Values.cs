@@ -77,7 +77,7 @@ internal sealed partial class SheetEvaluator
     {
         // The override's text is not the sheet's: evaluate it apart and report its problems at the definition it replaces.
         var sink = new DiagnosticSink();
-        var evaluator = new ExpressionEvaluator(sink, _scope, syntax.Source, () => _currentLine, LastDependencyLine, _display.Units);
+        var evaluator = new ExpressionEvaluator(sink, _scope, syntax.Source, () => _currentLine, LastDependencyLine);
         var value = evaluator.Evaluate(definition.Value, new EvalFrame { Scope = _scope, CallSite = target.Span });
         foreach (var d in sink.Diagnostics.Where(d => d.Severity == Severity.Error))
         {
