@@ -1,3 +1,4 @@
+using System.Diagnostics.CodeAnalysis;
 using System.Diagnostics;
 using System.Reflection;
 using System.Text.Json;
@@ -75,16 +76,16 @@ public static class LanguageServerHost
         Request(rpc, context, new CodeLensHandler(context));
 
         var shutdown = new ShutdownHandler(context);
-        rpc.AddLocalRpcMethod(typeof(ShutdownHandler).GetMethod(nameof(ShutdownHandler.ShutdownAsync))!, shutdown, new JsonRpcMethodAttribute(ShutdownHandler.Method));
+        rpc.AddLocalRpcMethod(Method(typeof(ShutdownHandler), nameof(ShutdownHandler.ShutdownAsync)), shutdown, new JsonRpcMethodAttribute(ShutdownHandler.Method));
         var exit = new ExitHandler(context);
-        rpc.AddLocalRpcMethod(typeof(ExitHandler).GetMethod(nameof(ExitHandler.Exit))!, exit, new JsonRpcMethodAttribute(ExitHandler.Method));
+        rpc.AddLocalRpcMethod(Method(typeof(ExitHandler), nameof(ExitHandler.Exit)), exit, new JsonRpcMethodAttribute(ExitHandler.Method));
     }
 
     private static void Request<TParams, TResult>(JsonRpc rpc, ServerContext context, IRequestHandler<TParams, TResult> handler)
         where TParams : class
     {
         var guard = new RequestGuard<TParams, TResult>(handler, context.State, context.Log);
-        rpc.AddLocalRpcMethod(Method(guard.GetType(), nameof(RequestGuard<TParams, TResult>.InvokeAsync)), guard,
+        rpc.AddLocalRpcMethod(Method(typeof(RequestGuard<TParams, TResult>), nameof(RequestGuard<TParams, TResult>.InvokeAsync)), guard,
             new JsonRpcMethodAttribute(handler.Method) { UseSingleObjectParameterDeserialization = true });
     }
 
@@ -92,9 +93,15 @@ public static class LanguageServerHost
         where TParams : class
     {
         var guard = new NotificationGuard<TParams>(handler, context.State, context.Log);
-        rpc.AddLocalRpcMethod(Method(guard.GetType(), nameof(NotificationGuard<TParams>.Invoke)), guard,
+        rpc.AddLocalRpcMethod(Method(typeof(NotificationGuard<TParams>), nameof(NotificationGuard<TParams>.Invoke)), guard,
             new JsonRpcMethodAttribute(handler.Method) { UseSingleObjectParameterDeserialization = true });
     }
 
-    private static MethodInfo Method(Type type, string name) => type.GetMethod(name, BindingFlags.Public | BindingFlags.Instance)!;
+    /// <summary>
+    /// A handler method by name. The annotation tells the trimmer to keep the public methods of the
+    /// types named here, so the lookup also works in a Native AOT build.
+    /// </summary>
+    private static MethodInfo Method([DynamicallyAccessedMembers(DynamicallyAccessedMemberTypes.PublicMethods)] Type type, string name) =>
+        type.GetMethod(name, BindingFlags.Public | BindingFlags.Instance)
+        ?? throw new InvalidOperationException($"the handler method {type.Name}.{name} is missing");
 }
