@@ -14,8 +14,6 @@ namespace CutSheet.LanguageServer.Server;
 /// </summary>
 public sealed class SheetScheduler(ServerState state, DocumentStore documents, DiagnosticConverter diagnostics, ServerLog log)
 {
-    /// <summary>A short pause lets a burst of keystrokes end before evaluating.</summary>
-    public static readonly TimeSpan Settle = TimeSpan.FromMilliseconds(25);
 
     public ClientChannel? Client { get; set; }
 
@@ -25,9 +23,12 @@ public sealed class SheetScheduler(ServerState state, DocumentStore documents, D
         var text = document.Text;
         int version = document.Version;
         var options = new RunOptions { Sources = new OpenDocumentSource(documents), WorkspaceRoot = state.WorkspaceRoot };
-        var evaluation = Task.Run(async () =>
+        // No pause before evaluating: a newer version cancels this one (its result is never
+        // published), so a burst of keystrokes costs at most some discarded work, and a single
+        // edit is answered as soon as the sheet is evaluated.
+        var evaluation = Task.Run(() =>
         {
-            await Task.Delay(Settle, superseded).ConfigureAwait(false);
+            superseded.ThrowIfCancellationRequested();
             var analysis = SheetAnalysis.Evaluate(text.Text, text.Path, version, options);
             superseded.ThrowIfCancellationRequested();
             return analysis;
