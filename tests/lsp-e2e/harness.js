@@ -7,7 +7,7 @@ const os = require('node:os');
 const { pathToFileURL } = require('node:url');
 const rpc = require('vscode-languageserver-protocol/node');
 
-/** The server binary: CUTSHEET_DLL (set by the xunit runner) or the CLI's Debug build. */
+/** The server: CUTSHEET_DLL (set by the xunit runner; a .dll, or a published native binary) or the CLI's Debug build. */
 function serverDll() {
   const fromEnv = process.env.CUTSHEET_DLL;
   if (fromEnv) return fromEnv;
@@ -18,7 +18,9 @@ function serverDll() {
 async function start({ initializationOptions, capabilities, workspace } = {}) {
   const dll = serverDll();
   if (!fs.existsSync(dll)) throw new Error(`server not built: ${dll}`);
-  const child = spawn('dotnet', ['exec', dll, 'lsp'], { stdio: ['pipe', 'pipe', 'pipe'] });
+  // A published native build (Native AOT) is started directly, so the shipped binary can be tested too.
+  const [program, args] = dll.endsWith('.dll') ? ['dotnet', ['exec', dll, 'lsp']] : [dll, ['lsp']];
+  const child = spawn(program, args, { stdio: ['pipe', 'pipe', 'pipe'] });
   let stderr = '';
   child.stderr.on('data', (d) => { stderr += d.toString(); });
   const connection = rpc.createProtocolConnection(
