@@ -237,13 +237,8 @@ public class BallScrewLibraryTests
     };
 
     [Theory, MemberData(nameof(Thresholds))]
-    public void Each_caution_fires_just_past_its_threshold_and_not_before(string name, string setup, string hazardous, string safe, string code)
-    {
-        var r = RunLibrary($"{setup}\nhazard = {hazardous}\nsafe = {safe}");
-        Assert.True(r.CodesOn("hazard").Contains(code), $"{name}: expected {code} on the hazardous side, got {Describe(r)}");
-        Assert.False(r.CodesOn("safe").Contains(code), $"{name}: {code} raised on the safe side: {Describe(r)}");
-        Assert.False(r.HasErrors, $"{name}: {Describe(r)}");
-    }
+    public void Each_caution_fires_just_past_its_threshold_and_not_before(string name, string setup, string hazardous, string safe, string code) =>
+        AssertThreshold(name, setup, hazardous, safe, code);
 
     [Fact]
     public void A_drive_efficiency_given_for_back_driving_is_flagged_by_its_kind()

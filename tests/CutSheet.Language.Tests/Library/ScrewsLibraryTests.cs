@@ -190,13 +190,8 @@ public class ScrewsLibraryTests
     };
 
     [Theory, MemberData(nameof(Thresholds))]
-    public void Each_caution_fires_just_past_its_threshold_and_not_before(string name, string setup, string hazardous, string safe, string code)
-    {
-        var r = RunLibrary($"{setup}\nhazard = {hazardous}\nsafe = {safe}");
-        Assert.True(r.CodesOn("hazard").Contains(code), $"{name}: expected {code} on the hazardous side, got {Describe(r)}");
-        Assert.False(r.CodesOn("safe").Contains(code), $"{name}: {code} raised on the safe side: {Describe(r)}");
-        Assert.False(r.HasErrors, $"{name}: {Describe(r)}");
-    }
+    public void Each_caution_fires_just_past_its_threshold_and_not_before(string name, string setup, string hazardous, string safe, string code) =>
+        AssertThreshold(name, setup, hazardous, safe, code);
 
     [Fact]
     public void Bad_input_gives_a_diagnostic_never_a_silent_non_finite_value()

@@ -33,6 +33,18 @@ internal static class ScrewsTestSupport
         return result.Diagnostics.Where(d => d.Path is null && source.GetPosition(d.Span.Start).Line == line).Select(d => d.Code).ToList();
     }
 
+    /// <summary>
+    /// A caution's threshold: <paramref name="code"/> is raised on the hazardous side, not on the safe
+    /// side, and the sheet has no errors.
+    /// </summary>
+    public static void AssertThreshold(string name, string setup, string hazardous, string safe, string code)
+    {
+        var r = RunLibrary($"{setup}\nhazard = {hazardous}\nsafe = {safe}");
+        Assert.True(r.CodesOn("hazard").Contains(code), $"{name}: expected {code} on the hazardous side, got {Describe(r)}");
+        Assert.False(r.CodesOn("safe").Contains(code), $"{name}: {code} raised on the safe side: {Describe(r)}");
+        Assert.False(r.HasErrors, $"{name}: {Describe(r)}");
+    }
+
     public static string Describe(SheetResult result) =>
         "[" + string.Join("; ", result.Diagnostics.Select(d => $"{d.Code} {d.Message}")) + "]";
 
