@@ -47,6 +47,37 @@ public sealed class EndToEndTests
         Assert.Contains("neovim check passed", check.Output);
     }
 
+    /// <summary>
+    /// A third real client: Emacs 28 with eglot 1.9 in batch mode (Debian's emacs-nox and
+    /// elpa-eglot, installed by .ci/run) runs the configuration documented in docs/editors.md —
+    /// diagnostics through Flymake, hover, formatting and an edit that clears the error. Fails,
+    /// rather than skips, when emacs is missing.
+    /// </summary>
+    [Fact]
+    public void Emacs_with_the_documented_configuration_passes()
+    {
+        string dll = Path.Combine(AppContext.BaseDirectory, "cutsheet.dll");
+        string script = Path.Combine(SuiteFolder(), "emacs", "check.sh");
+        var probe = Run("bash", ["-c", "command -v emacs"], SuiteFolder(), dll, TimeSpan.FromSeconds(10));
+        Assert.True(probe.Code == 0, "Emacs is not installed: apt-get install emacs-nox elpa-eglot (.ci/run installs them)");
+        var check = Run("bash", [script, dll], SuiteFolder(), dll, TimeSpan.FromMinutes(2));
+        Assert.True(check.Code == 0, $"the Emacs check failed ({check.Code}):\n{check.Output}");
+        Assert.Contains("emacs check passed", check.Output);
+    }
+
+    /// <summary>The configurations docs/editors.md shows are the files the client checks run.</summary>
+    [Theory]
+    [InlineData("lua", "neovim/cutsheet.lua")]
+    [InlineData("elisp", "emacs/cutsheet.el")]
+    public void Documented_editor_configuration_is_the_tested_file(string fence, string file)
+    {
+        string doc = File.ReadAllText(Path.Combine(SuiteFolder(), "..", "..", "docs", "editors.md"));
+        var block = System.Text.RegularExpressions.Regex.Match(doc, "```" + fence + "\n(.*?)```", System.Text.RegularExpressions.RegexOptions.Singleline);
+        Assert.True(block.Success, $"docs/editors.md has no ```{fence} block");
+        string tested = File.ReadAllText(Path.Combine(SuiteFolder(), file));
+        Assert.Contains(block.Groups[1].Value.Trim(), tested);
+    }
+
     private static (int Code, string Output) Run(string program, string[] args, string folder, string dll, TimeSpan timeout)
     {
         var start = new ProcessStartInfo(program) { WorkingDirectory = folder, RedirectStandardOutput = true, RedirectStandardError = true };
