@@ -239,10 +239,16 @@ public static class CompletionProvider
         return CompletionRanking.Rank(candidates);
     }
 
+    /// <summary>The last token starting before <paramref name="offset"/>, or -1; tokens are in text order, so a binary search finds it.</summary>
     private static int TokenBefore(IReadOnlyList<SyntaxToken> tokens, int offset)
     {
-        int found = -1;
-        for (int i = 0; i < tokens.Count && tokens[i].Start < offset; i++) found = i;
+        int low = 0, high = tokens.Count - 1, found = -1;
+        while (low <= high)
+        {
+            int mid = low + (high - low) / 2;
+            if (tokens[mid].Start < offset) { found = mid; low = mid + 1; }
+            else high = mid - 1;
+        }
         return found;
     }
 
