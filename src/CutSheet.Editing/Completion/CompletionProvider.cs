@@ -137,7 +137,8 @@ public static class CompletionProvider
     /// of thousands of names costs one pass of string matches per request.
     /// </summary>
     private static CompletionResult Names(SheetAnalysis analysis, TextSpan replace, int offset, int lineStart) =>
-        CompletionRanking.Rank(NameCandidates(analysis, analysis.Source.Slice(replace), replace, offset, lineStart));
+        CompletionRanking.Rank(NameCandidates(analysis, analysis.Source.Slice(replace), replace, offset, lineStart),
+            c => Symbol(c.Label, c.Symbol!, replace, null));
 
     private static IEnumerable<CompletionCandidate> NameCandidates(SheetAnalysis analysis, string typed, TextSpan replace, int offset, int lineStart)
     {
@@ -151,35 +152,35 @@ public static class CompletionProvider
         {
             foreach (var p in f.Parameters)
                 if (Fits(p.Name) is var m and >= 0 && seen.Add(p.Name))
-                    yield return new(new CompletionEntry(p.Name, CompletionCategory.Parameter, p.Name, replace, Detail: p.KindName), m, CompletionGroup.Local, 0);
+                    yield return new(p.Name, m, CompletionGroup.Local, 0, new CompletionEntry(p.Name, CompletionCategory.Parameter, p.Name, replace, Detail: p.KindName));
             foreach (var l in f.Clauses.Locals)
                 if (Fits(l.Name) is var m and >= 0 && seen.Add(l.Name))
-                    yield return new(new CompletionEntry(l.Name, CompletionCategory.Definition, l.Name, replace), m, CompletionGroup.Local, 0);
+                    yield return new(l.Name, m, CompletionGroup.Local, 0, new CompletionEntry(l.Name, CompletionCategory.Definition, l.Name, replace));
         }
         // The definition being written (it starts before the cursor and ends on the cursor's line or later) is not offered to itself.
         bool Writing(DefinitionSymbol d) => d.Path == analysis.Path && d.Syntax.Span.Start <= offset && d.Syntax.Span.End >= lineStart;
         foreach (var (name, symbol) in scope.OwnSymbols())
         {
             if (Fits(name) is not (var m and >= 0) || symbol is DefinitionSymbol d && Writing(d) || !seen.Add(name)) continue;
-            yield return new(Symbol(name, symbol, replace, null), m, CompletionGroup.Own, Place(symbol, analysis, offset));
+            yield return new(name, m, CompletionGroup.Own, Place(symbol, analysis, offset), Symbol: symbol);
         }
         foreach (var (name, imported) in scope.Imported)
             if (Fits(name) is var m and >= 0 && seen.Add(name))
-                yield return new(Symbol(name, imported.Symbol, replace, null), m, CompletionGroup.Imported, 0);
+                yield return new(name, m, CompletionGroup.Imported, 0, Symbol: imported.Symbol);
         foreach (var (alias, sheet) in scope.Namespaces)
             if (Fits(alias) is var m and >= 0 && seen.Add(alias))
-                yield return new(new CompletionEntry(alias, CompletionCategory.Namespace, alias, replace, Detail: EditingMessages.CompletionImportedSheet(sheet.DisplayName)),
-                    m, CompletionGroup.Imported, 0);
+                yield return new(alias, m, CompletionGroup.Imported, 0,
+                    new CompletionEntry(alias, CompletionCategory.Namespace, alias, replace, Detail: EditingMessages.CompletionImportedSheet(sheet.DisplayName)));
         foreach (var f in BuiltinCatalog.Functions)
             if (Fits(f.Name) is var m and >= 0 && seen.Add(f.Name))
-                yield return new(new CompletionEntry(f.Name, CompletionCategory.Function, f.Name, replace, Detail: f.Signature,
-                    Key: new CompletionKey(CompletionCategory.Function, f.Name)), m, CompletionGroup.Builtin, 0);
+                yield return new(f.Name, m, CompletionGroup.Builtin, 0, new CompletionEntry(f.Name, CompletionCategory.Function, f.Name, replace, Detail: f.Signature,
+                    Key: new CompletionKey(CompletionCategory.Function, f.Name)));
         foreach (var c in BuiltinCatalog.Constants.Keys)
             if (Fits(c) is var m and >= 0 && seen.Add(c))
-                yield return new(new CompletionEntry(c, CompletionCategory.Constant, c, replace, Detail: EditingMessages.CompletionConstant), m, CompletionGroup.Builtin, 0);
+                yield return new(c, m, CompletionGroup.Builtin, 0, new CompletionEntry(c, CompletionCategory.Constant, c, replace, Detail: EditingMessages.CompletionConstant));
         foreach (var k in Keywords.All)
             if (Fits(k) is var m and >= 0 && seen.Add(k))
-                yield return new(new CompletionEntry(k, CompletionCategory.Keyword, k, replace), m, CompletionGroup.Keyword, 0);
+                yield return new(k, m, CompletionGroup.Keyword, 0, new CompletionEntry(k, CompletionCategory.Keyword, k, replace));
     }
 
     /// <summary>Where a sheet's own name is declared, as a distance from the cursor; names without a place in this sheet rank between those above and those below.</summary>
@@ -195,7 +196,8 @@ public static class CompletionProvider
         CompletionRanking.Rank(sheet.OwnSymbols()
             .Select(s => (s.Name, s.Symbol, Match: CompletionMatch.Of(typed, s.Name)))
             .Where(s => s.Match >= 0)
-            .Select(s => new CompletionCandidate(Symbol(s.Name, s.Symbol, replace, alias), s.Match, CompletionGroup.Imported, 0)));
+            .Select(s => new CompletionCandidate(s.Name, s.Match, CompletionGroup.Imported, 0, Symbol: s.Symbol)),
+            c => Symbol(c.Label, c.Symbol!, replace, alias));
 
     /// <summary>
     /// An entry for a declared name with what is cheap to say about it. Definitions (whose value
@@ -230,7 +232,7 @@ public static class CompletionProvider
         void Offer(string name, string? detail, CompletionCategory category, CompletionGroup group)
         {
             if (CompletionMatch.Of(typed, name) is var m and >= 0)
-                candidates.Add(new(new CompletionEntry(name, category, name, replace, Detail: detail), m, group, 0));
+                candidates.Add(new(name, m, group, 0, new CompletionEntry(name, category, name, replace, Detail: detail)));
         }
         foreach (var k in scope.Kinds.Values) Offer(k.Name, k.Description, CompletionCategory.Kind, CompletionGroup.Own);
         foreach (var c in scope.Choices.Values) Offer(c.Name, EditingMessages.CompletionChoice, CompletionCategory.Choice, CompletionGroup.Own);

@@ -17,21 +17,29 @@ public static class CompletionRanking
     /// <summary>Distances of names below the cursor start here, so that every name above it ranks first.</summary>
     public const int Below = 1 << 29;
 
-    public static CompletionResult Rank(IEnumerable<CompletionCandidate> candidates, int limit = Limit)
+    /// <summary>
+    /// The best <paramref name="limit"/> candidates as entries; <paramref name="build"/> makes the
+    /// entry of a kept candidate that carries a symbol instead of an entry.
+    /// </summary>
+    public static CompletionResult Rank(IEnumerable<CompletionCandidate> candidates, Func<CompletionCandidate, CompletionEntry>? build = null, int limit = Limit)
     {
         var all = candidates.ToList();
         all.Sort(static (a, b) =>
         {
             int c = Tier(a.Match).CompareTo(Tier(b.Match));
-            if (c == 0) c = a.Group.CompareTo(b.Group);
+            // Compared as numbers: an enum's CompareTo takes an object and would box on every comparison.
+            if (c == 0) c = ((int)a.Group).CompareTo((int)b.Group);
             if (c == 0) c = a.Match.CompareTo(b.Match);
             if (c == 0) c = a.Distance.CompareTo(b.Distance);
-            return c != 0 ? c : string.CompareOrdinal(a.Entry.Label, b.Entry.Label);
+            return c != 0 ? c : string.CompareOrdinal(a.Label, b.Label);
         });
         int kept = Math.Min(limit, all.Count);
         var items = new CompletionEntry[kept];
         for (int i = 0; i < kept; i++)
-            items[i] = all[i].Entry with { SortText = i.ToString("D4", CultureInfo.InvariantCulture) };
+        {
+            var entry = all[i].Entry ?? build?.Invoke(all[i]) ?? throw new InvalidOperationException($"the candidate {all[i].Label} has no entry and nothing to build one");
+            items[i] = entry with { SortText = i.ToString("D4", CultureInfo.InvariantCulture) };
+        }
         return new CompletionResult(items, all.Count > limit);
     }
 
