@@ -78,7 +78,7 @@ public static class CompletionProvider
                 ? Members(ns, qualifier, typed, replace)
                 : CompletionResult.Empty;
         }
-        return Names(analysis, replace, offset, lineStart);
+        return Names(analysis, typed, replace, offset, lineStart);
     }
 
     private static CompletionResult? Greek(string before, int offset)
@@ -136,8 +136,8 @@ public static class CompletionProvider
     /// value and any documentation wait for <see cref="CompletionResolver"/>, so that a sheet
     /// of thousands of names costs one pass of string matches per request.
     /// </summary>
-    private static CompletionResult Names(SheetAnalysis analysis, TextSpan replace, int offset, int lineStart) =>
-        CompletionRanking.Rank(NameCandidates(analysis, analysis.Source.Slice(replace), replace, offset, lineStart),
+    private static CompletionResult Names(SheetAnalysis analysis, string typed, TextSpan replace, int offset, int lineStart) =>
+        CompletionRanking.Rank(NameCandidates(analysis, typed, replace, offset, lineStart),
             c => Symbol(c.Label, c.Symbol!, replace, null));
 
     private static IEnumerable<CompletionCandidate> NameCandidates(SheetAnalysis analysis, string typed, TextSpan replace, int offset, int lineStart)
