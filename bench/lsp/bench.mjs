@@ -181,9 +181,11 @@ for (let i = 0; i < EDITS; i++) {
   editMs.push(r.ms);
 }
 
-// Hover on the defined name of a random chain line; completion after the "x" that starts its right side.
-const hoverMs = [], completionMs = [];
-let hoverEmpty = 0, completionEmpty = 0, completionItems = 0, completionBytes = 0;
+// Hover on the defined name of a random chain line; completion after the "x" that starts its right side,
+// then (when the server offers it) completionItem/resolve of the first item, as an editor does for the selected one.
+const hoverMs = [], completionMs = [], resolveMs = [];
+const resolves = Boolean(init.capabilities.completionProvider.resolveProvider);
+let hoverEmpty = 0, completionEmpty = 0, completionItems = 0, completionBytes = 0, completionIncomplete = 0;
 const td = { uri };
 for (let i = 0; i < QUERIES; i++) {
   const line = big.chain[Math.floor(rand() * big.chain.length)];
@@ -199,6 +201,13 @@ for (let i = 0; i < QUERIES; i++) {
   if (!items.length) completionEmpty++;
   completionItems += items.length;
   completionBytes += JSON.stringify(c).length;
+  if (c?.isIncomplete) completionIncomplete++;
+  if (resolves && items.length) {
+    t = performance.now();
+    const r = await s.connection.sendRequest(rpc.CompletionResolveRequest.type, items[0]);
+    resolveMs.push(performance.now() - t);
+    if (r.label !== items[0].label) throw new Error(`resolve changed the label ${items[0].label} to ${r.label}`);
+  }
 }
 const bigMem = s.rss();
 await s.stop();
@@ -233,6 +242,9 @@ console.log('\n| what | figure | target | verdict |\n|---|---:|---|---|');
 for (const r of rows) console.log(`| ${r.join(' | ')} |`);
 console.log(`\nload average at end ${loadEnd}`);
 console.log(`edits: min ${f(Math.min(...editMs))}, p10 ${f(pct(editMs, 0.1))}, p90 ${f(pct(editMs, 0.9))} ms; ${nonEmpty} of ${EDITS} publications had diagnostics (expected 0)`);
-console.log(`hover: ${hoverEmpty} empty answers; completion: ${completionEmpty} empty answers (of ${QUERIES} each), ${Math.round(completionItems / QUERIES)} items and ${(completionBytes / QUERIES / 1024).toFixed(0)} KiB of JSON per answer on average`);
+console.log(`hover: ${hoverEmpty} empty answers; completion: ${completionEmpty} empty answers (of ${QUERIES} each), ${Math.round(completionItems / QUERIES)} items and ${(completionBytes / QUERIES / 1024).toFixed(1)} KiB of JSON per answer on average, ${completionIncomplete} marked incomplete`);
+console.log(resolves
+  ? `completionItem/resolve (advertised): first item of each answer resolved, p50 / p99 ${f(pct(resolveMs, 0.5))} / ${f(pct(resolveMs, 0.99))} ms`
+  : 'completionItem/resolve: not advertised; details travel in the list');
 console.log(`the 2,000-line server after the edits and queries: VmRSS ${bigMem.rss.toFixed(1)} MiB, VmHWM ${bigMem.hwm.toFixed(1)} MiB`);
 console.log(`50 opens: first publishDiagnostics of the last of them ${f(smallResults.at(-1).ms)} ms after its didOpen`);

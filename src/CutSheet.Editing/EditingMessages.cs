@@ -13,4 +13,14 @@ public static class EditingMessages
     public static string Reserved(string name) => $"'{name}' is a reserved word of the language";
 
     public static string AlreadyNamed(string name, string where) => $"'{name}' already names something in {where}";
+
+    // Completion details: what a name is when its value or signature says nothing more.
+    public const string CompletionTable = "table";
+    public const string CompletionChoice = "choice";
+    public const string CompletionKind = "kind";
+    public const string CompletionConstant = "constant";
+
+    public static string CompletionOption(string choice) => $"option of {choice}";
+
+    public static string CompletionImportedSheet(string sheet) => $"imported sheet {sheet}";
 }

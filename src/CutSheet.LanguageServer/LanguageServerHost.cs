@@ -62,6 +62,7 @@ public static class LanguageServerHost
         Notification(rpc, context, new DidChangeWatchedFilesHandler(context));
         Request(rpc, context, new HoverHandler(context));
         Request(rpc, context, new CompletionHandler(context));
+        Request(rpc, context, new CompletionResolveHandler(context));
         Request(rpc, context, new SignatureHelpHandler(context));
         Request(rpc, context, new DefinitionHandler(context));
         Request(rpc, context, new ReferencesHandler(context));

@@ -42,6 +42,14 @@ public sealed class MalformedMessageTests
         Assert.True(answer.ContainsKey("result"), answer.ToJsonString());
     }
 
+    /// <summary>A completion item the server cannot resolve comes back as sent: its label is "x" in every such case here.</summary>
+    private static async Task ExpectUnchanged(Task<JsonObject> request)
+    {
+        var answer = await request;
+        Assert.Equal("x", (string?)answer["result"]?["label"]);
+        Assert.Null(answer["result"]!["detail"]);
+    }
+
     private static readonly Dictionary<string, Case> Cases = new()
     {
         ["body is not JSON"] = async (c, _) => { await c.SendBodyAsync("{not json"); await ExpectParseError(c); },
@@ -66,6 +74,14 @@ public sealed class MalformedMessageTests
         ["line far past the end"] = (c, uri) => ExpectResult(c.RequestAsync("textDocument/hover", Sheets.At(uri, 100000, 3))),
         ["negative position"] = (c, uri) => ExpectResult(c.RequestAsync("textDocument/hover", Sheets.At(uri, -4, -7))),
         ["character past the line end"] = (c, uri) => ExpectResult(c.RequestAsync("textDocument/completion", Sheets.At(uri, 2, 5000))),
+        ["resolve with data a number"] = (c, _) => ExpectUnchanged(c.RequestAsync("completionItem/resolve", new { label = "x", data = 42 })),
+        ["resolve with data of the wrong shape"] = (c, _) => ExpectUnchanged(c.RequestAsync("completionItem/resolve", new { label = "x", data = new { uri = 7, name = new[] { 1 } } })),
+        ["resolve for a closed document"] = (c, _) => ExpectUnchanged(c.RequestAsync("completionItem/resolve",
+            new { label = "x", data = new { uri = "file:///nowhere/closed.cutsheet", category = "Definition", name = "x" } })),
+        ["resolve with an unknown category"] = (c, uri) => ExpectUnchanged(c.RequestAsync("completionItem/resolve",
+            new { label = "x", data = new { uri, category = "Spaceship", name = "F_rim" } })),
+        ["resolve without data"] = (c, _) => ExpectUnchanged(c.RequestAsync("completionItem/resolve", new { label = "x" })),
+        ["resolve without params"] = (c, _) => ExpectError(c.RequestAsync("completionItem/resolve", null), -32602),
         ["inverted range for inlay hints"] = (c, uri) => ExpectResult(c.RequestAsync("textDocument/inlayHint",
             new { textDocument = new { uri }, range = new { start = new { line = 9, character = 0 }, end = new { line = 0, character = 0 } } })),
         ["request id is a string"] = (c, uri) => ExpectResult(c.RequestAsync("textDocument/documentSymbol", Sheets.Document(uri), id: "text-id")),

@@ -39,6 +39,7 @@ test('handshake: capabilities and server info', () => {
     assert.equal(caps[c], true, c);
   }
   assert.equal(caps.renameProvider.prepareProvider, true);
+  assert.equal(caps.completionProvider.resolveProvider, true);
   assert.ok(caps.semanticTokensProvider.legend.tokenTypes.includes('type'));
 });
 
@@ -107,7 +108,7 @@ test('inlay hints: computed values and the check outcome', async () => {
   assert.deepEqual(rim.position, { line: 7, character: 28 });
 });
 
-test('completion: units after a number, Greek from a backslash name, names with values', async () => {
+test('completion: units after a number, Greek from a backslash name, names filtered, values on resolve', async () => {
   const v = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 0 } }, text: 'd = 16 m' }]);
   await server.waitForDiagnostics(uri, (p) => p.version === v);
   const units = await server.connection.sendRequest(rpc.CompletionRequest.type, { textDocument: { uri }, position: { line: 9, character: 8 } });
@@ -125,11 +126,29 @@ test('completion: units after a number, Greek from a backslash name, names with 
   const v3 = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 7 } }, text: 'x = F_' }]);
   await server.waitForDiagnostics(uri, (p) => p.version === v3);
   const names = await server.connection.sendRequest(rpc.CompletionRequest.type, { textDocument: { uri }, position: { line: 9, character: 6 } });
+  assert.deepEqual(names.items.map((i) => i.label), ['F_rim', 'F_axial'], 'only names starting with F_, nearest above first');
+  assert.equal(names.isIncomplete, false);
   const rim = names.items.find((i) => i.label === 'F_rim');
-  assert.equal(rim.detail, '13.13 N');
-  assert.ok(names.items.some((i) => i.label === 'lead' && /length_per_revolution/.test(i.detail)));
+  assert.equal(rim.kind, rpc.CompletionItemKind.Variable);
+  assert.equal(rim.detail, undefined, 'the value is left to completionItem/resolve');
+  assert.ok(rim.data, 'an item to resolve carries data');
+  // 13.13 N: the value the hover test above shows for F_rim.
+  const resolved = await server.connection.sendRequest(rpc.CompletionResolveRequest.type, rim);
+  assert.equal(resolved.detail, '13.13 N');
+  assert.equal(resolved.label, 'F_rim');
 
-  const v4 = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 6 } }, text: '' }]);
+  const v5 = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 6 } }, text: 'x = lea' }]);
+  await server.waitForDiagnostics(uri, (p) => p.version === v5);
+  const lib = await server.connection.sendRequest(rpc.CompletionRequest.type, { textDocument: { uri }, position: { line: 9, character: 7 } });
+  const lead = lib.items.find((i) => i.label === 'lead');
+  assert.match(lead.detail, /length_per_revolution/, 'a signature is cheap and stays in the list');
+  const leadResolved = await server.connection.sendRequest(rpc.CompletionResolveRequest.type, lead);
+  assert.ok(leadResolved.documentation && leadResolved.documentation.value.length > 0, JSON.stringify(leadResolved));
+
+  const odd = await server.connection.sendRequest(rpc.CompletionResolveRequest.type, { label: 'x', data: 42 });
+  assert.deepEqual(odd, { label: 'x', data: 42 }, 'unreadable data: the item comes back unchanged');
+
+  const v4 = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 7 } }, text: '' }]);
   await server.waitForDiagnostics(uri, (p) => p.version === v4);
 });
 

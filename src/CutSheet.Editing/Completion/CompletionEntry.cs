@@ -4,8 +4,12 @@ namespace CutSheet.Editing.Completion;
 
 /// <summary>
 /// One completion: <see cref="InsertText"/> replaces <see cref="Replace"/> (the partly typed
-/// word); <see cref="FilterText"/> is what the typed text is matched against.
+/// word); <see cref="FilterText"/> is what the typed text is matched against. When
+/// <see cref="Key"/> is set, more is known than the entry carries (a definition's value,
+/// documentation): <see cref="CompletionResolver"/> finds it on request, so that a list of many
+/// entries does not compute what the user will look at for one.
 /// </summary>
 public sealed record CompletionEntry(
     string Label, CompletionCategory Category, string InsertText, TextSpan Replace,
-    string? Detail = null, string? Documentation = null, string? SortText = null, string? FilterText = null);
+    string? Detail = null, string? Documentation = null, string? SortText = null, string? FilterText = null,
+    CompletionKey? Key = null);

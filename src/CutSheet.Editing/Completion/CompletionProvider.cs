@@ -1,6 +1,5 @@
 using CutSheet.Editing.Analysis;
 using CutSheet.Editing.Signatures;
-using CutSheet.Editing.Values;
 using CutSheet.Language.Evaluation;
 using CutSheet.Language.Semantics;
 using CutSheet.Language.Syntax;
@@ -13,7 +12,9 @@ namespace CutSheet.Editing.Completion;
 /// Completions for the place being typed: Greek letters after a backslash, superscript powers
 /// after <c>^</c>, units right after a number or after <c>as</c> (where the language reads a
 /// unit), the names of an imported sheet after <c>alias.</c>, and elsewhere the names in
-/// scope, the functions with their signatures, the constants and the keywords.
+/// scope, the functions with their signatures, the constants and the keywords. Names are
+/// filtered by the word being typed, ranked (<see cref="CompletionRanking"/>) and capped; a cut
+/// list is incomplete, so the editor asks again as the user types.
 /// </summary>
 public static class CompletionProvider
 {
@@ -66,17 +67,18 @@ public static class CompletionProvider
         int wordStart = offset;
         while (wordStart > lineStart && IsNameChar(analysis.Text[wordStart - 1])) wordStart--;
         var replace = TextSpan.FromBounds(wordStart, offset);
-        if (IsKindPlace(analysis.Text[lineStart..wordStart])) return new CompletionResult(KindNames(analysis, replace).ToList(), false);
+        string typed = analysis.Text[wordStart..offset];
+        if (IsKindPlace(analysis.Text[lineStart..wordStart])) return KindNames(analysis, typed, replace);
         if (wordStart > lineStart && analysis.Text[wordStart - 1] == '.')
         {
             int qualifierEnd = wordStart - 1, qualifierStart = qualifierEnd;
             while (qualifierStart > lineStart && IsNameChar(analysis.Text[qualifierStart - 1])) qualifierStart--;
             string qualifier = analysis.Text[qualifierStart..qualifierEnd];
             return analysis.Result.Scope.Namespaces.TryGetValue(qualifier, out var ns)
-                ? new CompletionResult(Symbols(ns.OwnSymbols(), replace, analysis.Result.Display.Digits).ToList(), false)
+                ? Members(ns, qualifier, typed, replace)
                 : CompletionResult.Empty;
         }
-        return new CompletionResult(Names(analysis, replace, offset).ToList(), false);
+        return Names(analysis, typed, replace, offset, lineStart);
     }
 
     private static CompletionResult? Greek(string before, int offset)
@@ -122,60 +124,96 @@ public static class CompletionProvider
             .ToList();
         var items = matches.Take(UnitLimit)
             .Select((x, i) => new CompletionEntry(x.Unit.Symbol, CompletionCategory.Unit, x.Unit.Symbol, replace,
-                Detail: x.Unit.Name, Documentation: x.Unit.Note, SortText: i.ToString("D4", System.Globalization.CultureInfo.InvariantCulture)))
+                Detail: x.Unit.Name, SortText: i.ToString("D4", System.Globalization.CultureInfo.InvariantCulture),
+                Key: x.Unit.Note is null ? null : new CompletionKey(CompletionCategory.Unit, x.Unit.Symbol)))
             .ToList();
         return new CompletionResult(items, matches.Count > UnitLimit);
     }
 
-    private static IEnumerable<CompletionEntry> Names(SheetAnalysis analysis, TextSpan replace, int offset)
+    /// <summary>
+    /// The names in scope that fit the typed word, ranked and capped. Only what is cheap goes
+    /// into an entry (a function's signature, what kind of thing a name is); a definition's
+    /// value and any documentation wait for <see cref="CompletionResolver"/>, so that a sheet
+    /// of thousands of names costs one pass of string matches per request.
+    /// </summary>
+    private static CompletionResult Names(SheetAnalysis analysis, string typed, TextSpan replace, int offset, int lineStart) =>
+        CompletionRanking.Rank(NameCandidates(analysis, typed, replace, offset, lineStart),
+            c => Symbol(c.Label, c.Symbol!, replace, null));
+
+    private static IEnumerable<CompletionCandidate> NameCandidates(SheetAnalysis analysis, string typed, TextSpan replace, int offset, int lineStart)
     {
         var scope = analysis.Result.Scope;
-        int digits = analysis.Result.Display.Digits;
         var seen = new HashSet<string>(StringComparer.Ordinal);
+        // Whether a name is offered is decided before anything else about it is computed.
+        int Fits(string name) => seen.Contains(name) ? CompletionMatch.None : CompletionMatch.Of(typed, name);
 
         // Inside a function: its parameters and locals come first.
         foreach (var f in analysis.Result.Syntax.Statements.OfType<Language.Syntax.Nodes.FunctionSyntax>().Where(f => f.Span.ContainsOrTouches(offset)))
         {
             foreach (var p in f.Parameters)
-                if (seen.Add(p.Name)) yield return new CompletionEntry(p.Name, CompletionCategory.Parameter, p.Name, replace, Detail: p.KindName, SortText: "0" + p.Name);
+                if (Fits(p.Name) is var m and >= 0 && seen.Add(p.Name))
+                    yield return new(p.Name, m, CompletionGroup.Local, 0, new CompletionEntry(p.Name, CompletionCategory.Parameter, p.Name, replace, Detail: p.KindName));
             foreach (var l in f.Clauses.Locals)
-                if (seen.Add(l.Name)) yield return new CompletionEntry(l.Name, CompletionCategory.Definition, l.Name, replace, SortText: "0" + l.Name);
+                if (Fits(l.Name) is var m and >= 0 && seen.Add(l.Name))
+                    yield return new(l.Name, m, CompletionGroup.Local, 0, new CompletionEntry(l.Name, CompletionCategory.Definition, l.Name, replace));
         }
-        // The definition being written is not offered to itself.
-        bool Writing(DefinitionSymbol d) => d.Path == analysis.Path && d.Syntax.Span.Start <= offset
-            && offset <= analysis.Source.LineEnd(analysis.Source.GetPosition(d.Syntax.Span.End).Line);
-        var own = scope.OwnSymbols().Where(s => !(s.Symbol is DefinitionSymbol d && Writing(d)));
-        foreach (var e in Symbols(own, replace, digits, analysis))
-            if (seen.Add(e.Label)) yield return e;
-        foreach (var e in Symbols(scope.Imported.Select(i => (i.Key, i.Value.Symbol)), replace, digits))
-            if (seen.Add(e.Label)) yield return e;
-        foreach (var alias in scope.Namespaces.Keys)
-            if (seen.Add(alias)) yield return new CompletionEntry(alias, CompletionCategory.Namespace, alias, replace, Detail: "imported sheet " + scope.Namespaces[alias].DisplayName, SortText: "2" + alias);
+        // The definition being written (it starts before the cursor and ends on the cursor's line or later) is not offered to itself.
+        bool Writing(DefinitionSymbol d) => d.Path == analysis.Path && d.Syntax.Span.Start <= offset && d.Syntax.Span.End >= lineStart;
+        foreach (var (name, symbol) in scope.OwnSymbols())
+        {
+            if (Fits(name) is not (var m and >= 0) || symbol is DefinitionSymbol d && Writing(d) || !seen.Add(name)) continue;
+            yield return new(name, m, CompletionGroup.Own, Place(symbol, analysis, offset), Symbol: symbol);
+        }
+        foreach (var (name, imported) in scope.Imported)
+            if (Fits(name) is var m and >= 0 && seen.Add(name))
+                yield return new(name, m, CompletionGroup.Imported, 0, Symbol: imported.Symbol);
+        foreach (var (alias, sheet) in scope.Namespaces)
+            if (Fits(alias) is var m and >= 0 && seen.Add(alias))
+                yield return new(alias, m, CompletionGroup.Imported, 0,
+                    new CompletionEntry(alias, CompletionCategory.Namespace, alias, replace, Detail: EditingMessages.CompletionImportedSheet(sheet.DisplayName)));
         foreach (var f in BuiltinCatalog.Functions)
-            if (seen.Add(f.Name)) yield return new CompletionEntry(f.Name, CompletionCategory.Function, f.Name, replace, Detail: f.Signature, Documentation: f.Description, SortText: "3" + f.Name);
+            if (Fits(f.Name) is var m and >= 0 && seen.Add(f.Name))
+                yield return new(f.Name, m, CompletionGroup.Builtin, 0, new CompletionEntry(f.Name, CompletionCategory.Function, f.Name, replace, Detail: f.Signature,
+                    Key: new CompletionKey(CompletionCategory.Function, f.Name)));
         foreach (var c in BuiltinCatalog.Constants.Keys)
-            if (seen.Add(c)) yield return new CompletionEntry(c, CompletionCategory.Constant, c, replace, Detail: "constant", SortText: "3" + c);
-        foreach (var k in Keywords.All.Order(StringComparer.Ordinal))
-            if (seen.Add(k)) yield return new CompletionEntry(k, CompletionCategory.Keyword, k, replace, SortText: "4" + k);
+            if (Fits(c) is var m and >= 0 && seen.Add(c))
+                yield return new(c, m, CompletionGroup.Builtin, 0, new CompletionEntry(c, CompletionCategory.Constant, c, replace, Detail: EditingMessages.CompletionConstant));
+        foreach (var k in Keywords.All)
+            if (Fits(k) is var m and >= 0 && seen.Add(k))
+                yield return new(k, m, CompletionGroup.Keyword, 0, new CompletionEntry(k, CompletionCategory.Keyword, k, replace));
     }
 
-    private static IEnumerable<CompletionEntry> Symbols(IEnumerable<(string Name, object Symbol)> symbols, TextSpan replace, int digits, SheetAnalysis? own = null)
+    /// <summary>Where a sheet's own name is declared, as a distance from the cursor; names without a place in this sheet rank between those above and those below.</summary>
+    private static int Place(object symbol, SheetAnalysis analysis, int offset) => symbol switch
     {
-        foreach (var (name, symbol) in symbols)
-        {
-            yield return symbol switch
-            {
-                DefinitionSymbol d => new CompletionEntry(name, CompletionCategory.Definition, name, replace,
-                    Detail: DefinitionValue(d, digits, own), Documentation: d.Syntax.Clauses.Description?.Value, SortText: "1" + name),
-                FunctionSymbol f => new CompletionEntry(name, CompletionCategory.Function, name, replace,
-                    Detail: SignatureText.Of(f.Syntax, f.Home.SourceText), Documentation: f.Syntax.Clauses.Description?.Value, SortText: "1" + name),
-                ChoiceOption o => new CompletionEntry(name, CompletionCategory.Option, name, replace, Detail: "option of " + o.Type.Name, SortText: "1" + name),
-                TableSymbol t => new CompletionEntry(name, CompletionCategory.Table, name, replace, Detail: "table", SortText: "1" + name),
-                ChoiceType c => new CompletionEntry(name, CompletionCategory.Choice, name, replace, Detail: "choice", SortText: "1" + name),
-                _ => new CompletionEntry(name, CompletionCategory.Kind, name, replace, Detail: "kind", SortText: "1" + name),
-            };
-        }
-    }
+        DefinitionSymbol d when d.Path == analysis.Path => CompletionRanking.Distance(d.Syntax.Span.Start, offset),
+        FunctionSymbol f when f.Home == analysis.Result.Scope => CompletionRanking.Distance(f.Syntax.Span.Start, offset),
+        _ => CompletionRanking.Below - 1,
+    };
+
+    /// <summary>The members of the sheet imported as <paramref name="alias"/> that fit the typed word.</summary>
+    private static CompletionResult Members(SheetScope sheet, string alias, string typed, TextSpan replace) =>
+        CompletionRanking.Rank(sheet.OwnSymbols()
+            .Select(s => (s.Name, s.Symbol, Match: CompletionMatch.Of(typed, s.Name)))
+            .Where(s => s.Match >= 0)
+            .Select(s => new CompletionCandidate(s.Name, s.Match, CompletionGroup.Imported, 0, Symbol: s.Symbol)),
+            c => Symbol(c.Label, c.Symbol!, replace, alias));
+
+    /// <summary>
+    /// An entry for a declared name with what is cheap to say about it. Definitions (whose value
+    /// text needs formatting) and anything with a description carry a key for resolving instead.
+    /// </summary>
+    private static CompletionEntry Symbol(string name, object symbol, TextSpan replace, string? alias) => symbol switch
+    {
+        DefinitionSymbol => new CompletionEntry(name, CompletionCategory.Definition, name, replace,
+            Key: new CompletionKey(CompletionCategory.Definition, name, alias)),
+        FunctionSymbol f => new CompletionEntry(name, CompletionCategory.Function, name, replace, Detail: SignatureText.Of(f.Syntax, f.Home.SourceText),
+            Key: f.Syntax.Clauses.Description is null ? null : new CompletionKey(CompletionCategory.Function, name, alias)),
+        ChoiceOption o => new CompletionEntry(name, CompletionCategory.Option, name, replace, Detail: EditingMessages.CompletionOption(o.Type.Name)),
+        TableSymbol => new CompletionEntry(name, CompletionCategory.Table, name, replace, Detail: EditingMessages.CompletionTable),
+        ChoiceType => new CompletionEntry(name, CompletionCategory.Choice, name, replace, Detail: EditingMessages.CompletionChoice),
+        _ => new CompletionEntry(name, CompletionCategory.Kind, name, replace, Detail: EditingMessages.CompletionKind),
+    };
 
     /// <summary>
     /// After a ':' in a function's head (before the line's first '='): a parameter's or the
@@ -187,30 +225,32 @@ public static class CompletionProvider
         return trimmed.EndsWith(':') && !trimmed.Contains('=') && trimmed.Contains('(');
     }
 
-    private static IEnumerable<CompletionEntry> KindNames(SheetAnalysis analysis, TextSpan replace)
+    private static CompletionResult KindNames(SheetAnalysis analysis, string typed, TextSpan replace)
     {
         var scope = analysis.Result.Scope;
-        foreach (var k in scope.Kinds.Values)
-            yield return new CompletionEntry(k.Name, CompletionCategory.Kind, k.Name, replace, Detail: k.Description, SortText: "0" + k.Name);
-        foreach (var c in scope.Choices.Values)
-            yield return new CompletionEntry(c.Name, CompletionCategory.Choice, c.Name, replace, Detail: "choice", SortText: "0" + c.Name);
-        foreach (var k in Kinds.Builtin.Where(k => k.AmbiguousWith is null))
-            yield return new CompletionEntry(k.Name, CompletionCategory.Kind, k.Name, replace, Detail: k.Description, SortText: "1" + k.Name);
-        foreach (var word in new[] { "number", "list", "boolean" })
-            yield return new CompletionEntry(word, CompletionCategory.Kind, word, replace, SortText: "2" + word);
+        var candidates = new List<CompletionCandidate>();
+        void Offer(string name, string? detail, CompletionCategory category, CompletionGroup group)
+        {
+            if (CompletionMatch.Of(typed, name) is var m and >= 0)
+                candidates.Add(new(name, m, group, 0, new CompletionEntry(name, category, name, replace, Detail: detail)));
+        }
+        foreach (var k in scope.Kinds.Values) Offer(k.Name, k.Description, CompletionCategory.Kind, CompletionGroup.Own);
+        foreach (var c in scope.Choices.Values) Offer(c.Name, EditingMessages.CompletionChoice, CompletionCategory.Choice, CompletionGroup.Own);
+        foreach (var k in Kinds.Builtin.Where(k => k.AmbiguousWith is null)) Offer(k.Name, k.Description, CompletionCategory.Kind, CompletionGroup.Builtin);
+        foreach (var word in new[] { "number", "list", "boolean" }) Offer(word, null, CompletionCategory.Kind, CompletionGroup.Keyword);
+        return CompletionRanking.Rank(candidates);
     }
 
-    private static string? DefinitionValue(DefinitionSymbol d, int digits, SheetAnalysis? own)
-    {
-        if (own is not null && own.Result.Definitions.FirstOrDefault(r => r.Definition.NameSpan == d.Syntax.NameSpan) is { } result)
-            return result.Value?.Text;
-        return ValueText.Of(d, digits);
-    }
-
+    /// <summary>The last token starting before <paramref name="offset"/>, or -1; tokens are in text order, so a binary search finds it.</summary>
     private static int TokenBefore(IReadOnlyList<SyntaxToken> tokens, int offset)
     {
-        int found = -1;
-        for (int i = 0; i < tokens.Count && tokens[i].Start < offset; i++) found = i;
+        int low = 0, high = tokens.Count - 1, found = -1;
+        while (low <= high)
+        {
+            int mid = low + (high - low) / 2;
+            if (tokens[mid].Start < offset) { found = mid; low = mid + 1; }
+            else high = mid - 1;
+        }
         return found;
     }
 

@@ -4,7 +4,11 @@ using CutSheet.LanguageServer.Server;
 
 namespace CutSheet.LanguageServer.Handlers;
 
-/// <summary><c>textDocument/completion</c>: every item replaces the partly typed word with a text edit.</summary>
+/// <summary>
+/// <c>textDocument/completion</c>: every item replaces the partly typed word with a text edit.
+/// The list is filtered, ranked and capped by the editing layer (incomplete when cut); items
+/// with more to show carry data for <see cref="CompletionResolveHandler"/>.
+/// </summary>
 public sealed class CompletionHandler(ServerContext context) : IRequestHandler<CompletionParams, CompletionList>
 {
     public string Method => "textDocument/completion";
@@ -25,6 +29,7 @@ public sealed class CompletionHandler(ServerContext context) : IRequestHandler<C
                 SortText = i.SortText,
                 FilterText = i.FilterText,
                 TextEdit = new TextEdit { Range = context.Positions.ToRange(analysis.Source, i.Replace), NewText = i.InsertText },
+                Data = i.Key is { } key ? new CompletionItemData { Uri = p.TextDocument.Uri, Category = key.Category.ToString(), Name = key.Name, Alias = key.Alias } : null,
             }).ToArray(),
         };
     }

@@ -31,7 +31,7 @@ public sealed class InitializeHandler(ServerContext context) : IRequestHandler<I
                 PositionEncoding = state.Positions.Encoding,
                 TextDocumentSync = new TextDocumentSyncOptions { OpenClose = true, Change = ProtocolNumbers.IncrementalSync, Save = new SaveOptions { IncludeText = false } },
                 HoverProvider = true,
-                CompletionProvider = new CompletionOptions { TriggerCharacters = ["\\", "^", ".", " "], ResolveProvider = false },
+                CompletionProvider = new CompletionOptions { TriggerCharacters = ["\\", "^", ".", " "], ResolveProvider = true },
                 SignatureHelpProvider = new SignatureHelpOptions { TriggerCharacters = ["(", ","], RetriggerCharacters = [":"] },
                 DefinitionProvider = true,
                 ReferencesProvider = true,
@@ -46,7 +46,7 @@ public sealed class InitializeHandler(ServerContext context) : IRequestHandler<I
                 DocumentFormattingProvider = true,
                 FoldingRangeProvider = true,
                 InlayHintProvider = true,
-                CodeLensProvider = new CodeLensOptions { ResolveProvider = false },
+                CodeLensProvider = new CodeLensOptions { ResolveProvider = true },
             },
         });
     }

@@ -1,6 +1,11 @@
 namespace CutSheet.LanguageServer.Protocol;
 
-/// <summary>One completion.</summary>
+/// <summary>
+/// One completion. <see cref="Data"/> is kept by the client and sent back with
+/// <c>completionItem/resolve</c>: the server writes a <see cref="CompletionItemData"/>, and reads
+/// back whatever JSON arrives (a <see cref="System.Text.Json.JsonElement"/>), so that a client's
+/// odd data cannot fail the request.
+/// </summary>
 public sealed class CompletionItem
 {
     public string Label { get; set; } = "";
@@ -10,4 +15,5 @@ public sealed class CompletionItem
     public string? SortText { get; set; }
     public string? FilterText { get; set; }
     public TextEdit? TextEdit { get; set; }
+    public object? Data { get; set; }
 }

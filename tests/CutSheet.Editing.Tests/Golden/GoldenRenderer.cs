@@ -49,6 +49,10 @@ public static class GoldenRenderer
     private static string Hover(SheetAnalysis a, int cursor) =>
         HoverProvider.Hover(a, cursor) is { } h ? $"span {Span(a.Source, h.Span)} '{a.Source.Slice(h.Span)}'\n{h.Markdown}\n" : "(no hover)\n";
 
+    /// <summary>
+    /// The list as the editor receives it (already filtered and ranked), its first 25 entries in
+    /// sort order; a detail left to resolving is resolved here and marked so.
+    /// </summary>
     private static string Completion(SheetAnalysis a, int cursor)
     {
         var result = CompletionProvider.Complete(a, cursor);
@@ -56,13 +60,17 @@ public static class GoldenRenderer
         if (result.Items.Count == 0) return "(no completions)\n";
         var replace = result.Items[0].Replace;
         string typed = a.Source.Slice(replace);
-        sb.Append($"replace {Span(a.Source, replace)} '{typed}'{(result.IsIncomplete ? " (incomplete)" : "")}\n");
+        sb.Append($"replace {Span(a.Source, replace)} '{typed}', {result.Items.Count} {(result.Items.Count == 1 ? "item" : "items")}{(result.IsIncomplete ? " (incomplete)" : "")}\n");
         var shown = result.Items
-            .Where(i => (i.FilterText ?? i.Label).StartsWith(typed, StringComparison.OrdinalIgnoreCase))
             .OrderBy(i => i.SortText ?? i.Label, StringComparer.Ordinal).ThenBy(i => i.Label, StringComparer.Ordinal)
             .Take(25);
         foreach (var i in shown)
-            sb.Append($"{i.Label} [{i.Category}]{(i.InsertText != i.Label ? " inserts '" + i.InsertText + "'" : "")}{(i.Detail is null ? "" : " — " + i.Detail)}\n");
+        {
+            string detail = i.Detail is not null ? " — " + i.Detail
+                : i.Key is not null && CompletionResolver.Resolve(a, i.Key)?.Detail is { } resolved ? " — " + resolved + " (resolved)"
+                : "";
+            sb.Append($"{i.Label} [{i.Category}]{(i.InsertText != i.Label ? " inserts '" + i.InsertText + "'" : "")}{detail}\n");
+        }
         return sb.ToString();
     }
 
