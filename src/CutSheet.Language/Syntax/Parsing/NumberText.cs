@@ -1,13 +1,37 @@
+using System.Buffers;
 using System.Globalization;
 
 namespace CutSheet.Language.Syntax.Parsing;
 
-/// <summary>Reads the text of a number token: decimals, exponents, integer fractions and mixed numbers.</summary>
+/// <summary>
+/// Reads the text of a number token: decimals, exponents, integer fractions and mixed numbers.
+/// It reads the source text in place, with no substring. It looks at the characters rather than
+/// at the tokenizer's <see cref="TokenFlags.Fraction"/> flag because expressions parsed through the
+/// statement grammar arrive without flags; a search for a space or a slash in a few characters
+/// costs next to nothing.
+/// </summary>
 internal static class NumberText
 {
-    public static double Parse(string text)
+    /// <summary>The spaces that separate the whole part of a mixed number from its fraction.</summary>
+    private static readonly SearchValues<char> MixedNumberSpaces = SearchValues.Create(" \t\u00A0\u202F\u2009");
+
+    /// <summary>What can take a number out of the finite range: an exponent, or a fraction's zero denominator.</summary>
+    private static readonly SearchValues<char> ExponentOrFraction = SearchValues.Create("eE/");
+
+    /// <summary>
+    /// The longest plain decimal (no exponent) that is certainly finite: 308 characters stay below
+    /// <see cref="double.MaxValue"/> (about 1.8 × 10³⁰⁸).
+    /// </summary>
+    private const int LongestCertainlyFinite = 308;
+
+    /// <summary>True when the number's value is finite; the common number is not parsed at all to tell.</summary>
+    public static bool IsFinite(ReadOnlySpan<char> text) =>
+        (text.Length <= LongestCertainlyFinite && !text.ContainsAny(ExponentOrFraction)) || double.IsFinite(Parse(text));
+
+    /// <summary>The value of a number's text, a fraction or mixed number included.</summary>
+    public static double Parse(ReadOnlySpan<char> text)
     {
-        int space = text.IndexOfAny([' ', '\t', '\u00A0', '\u202F', '\u2009']);
+        int space = text.IndexOfAny(MixedNumberSpaces);
         if (space > 0)
         {
             double whole = Parse(text[..space]);
@@ -21,6 +45,9 @@ internal static class NumberText
             return n / d;
         }
         if (text.EndsWith('.')) text = text[..^1];
-        return double.Parse(text.Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture);
+        // A decimal comma is reported by the sheet parser; where a value is still read, the comma counts as a point.
+        if (text.Contains(','))
+            return double.Parse(text.ToString().Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture);
+        return double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
     }
 }

@@ -216,7 +216,7 @@ internal static class SheetParser
                         diagnostics.Add(Diagnostic.Error(DiagnosticCodes.FootMark, t.Span, DiagnosticMessages.FootMark,
                             new Fix("write ft", [new TextEdit(t.Span, " ft")])));
                     break;
-                case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) == 0 && !double.IsFinite(NumberText.Parse(source.Slice(t.Span))):
+                case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) == 0 && !NumberText.IsFinite(source.Text.AsSpan(t.Start, t.Length)):
                     diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NotFinite, t.Span, DiagnosticMessages.NumberNotFinite(source.Slice(t.Span))));
                     fatal = true;
                     break;
