@@ -10,17 +10,29 @@ namespace CutSheet.Language.Syntax;
 /// </summary>
 public sealed class SheetSyntax
 {
-    internal SheetSyntax(SourceText source, SyntaxToken[] tokens, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
+    /// <summary>The tokens without whitespace, as the parser read them.</summary>
+    private readonly SyntaxToken[] _tokensWithoutWhitespace;
+
+    /// <summary>Every token, made from <see cref="_tokensWithoutWhitespace"/> when first asked for.</summary>
+    private SyntaxToken[]? _tokens;
+
+    internal SheetSyntax(SourceText source, SyntaxToken[] tokensWithoutWhitespace, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
     {
         Source = source;
-        Tokens = tokens;
+        _tokensWithoutWhitespace = tokensWithoutWhitespace;
         Statements = statements;
         Diagnostics = diagnostics;
     }
 
     public SourceText Source { get; }
 
-    public IReadOnlyList<SyntaxToken> Tokens { get; }
+    /// <summary>
+    /// Every token, whitespace included, exactly as <see cref="Tokenizer.Tokenize(string)"/> gives them.
+    /// Only the editor asks for them, so the whitespace tokens (half of all) are put back on first use,
+    /// not stored by every parse. Two threads asking at once may both build the list; one is kept.
+    /// </summary>
+    public IReadOnlyList<SyntaxToken> Tokens =>
+        _tokens ?? Interlocked.CompareExchange(ref _tokens, WhitespaceTokens.Restore(_tokensWithoutWhitespace, Source.Length), null) ?? _tokens;
 
     public IReadOnlyList<StatementSyntax> Statements { get; }
 

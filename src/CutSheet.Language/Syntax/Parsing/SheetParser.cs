@@ -1,3 +1,4 @@
+using System.Buffers;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Text;
@@ -22,64 +23,22 @@ internal static class SheetParser
 
     public static SheetSyntax Parse(SourceText source)
     {
-        var tokens = Tokenizer.Tokenize(source.Text);
+        var tokens = Tokenizer.Tokenize(source.Text, keepWhitespace: false);
         var diagnostics = new List<Diagnostic>();
-        var statements = new List<StatementSyntax>();
-        var significant = new SyntaxToken[tokens.Length];
+        // A statement starts a line, so the line count bounds the statement count.
+        var statements = new List<StatementSyntax>(source.LineCount);
+        // The significant tokens are needed only while parsing: no node keeps them, so the array is pooled.
+        var significant = ArrayPool<SyntaxToken>.Shared.Rent(Math.Max(tokens.Length, 1));
         var pool = new StringPool();
-        foreach (var group in Group(tokens, significant))
+        var groups = new StatementGroups(tokens, significant);
+        while (groups.MoveNext(out var group))
         {
             var statement = ParseStatement(source, significant.AsSpan(group.Start, group.Count), group.Comment, diagnostics, pool);
             if (statement is not null) statements.Add(statement);
         }
+        // Should parsing throw, the rented array is simply not handed back: the collector takes it.
+        ArrayPool<SyntaxToken>.Shared.Return(significant);
         return new SheetSyntax(source, tokens, statements, diagnostics);
-    }
-
-    /// <summary>
-    /// A statement's significant tokens, a contiguous range of the sheet's significant tokens
-    /// (line breaks and trivia dropped; indented clause lines are consecutive, so they extend the
-    /// range), and the comment on its first line, which is its description.
-    /// </summary>
-    private readonly record struct StatementGroup(int Start, int Count, SyntaxToken? Comment, bool IsFunction);
-
-    private static List<StatementGroup> Group(SyntaxToken[] tokens, SyntaxToken[] significant)
-    {
-        var groups = new List<StatementGroup>();
-        int n = 0, i = 0;
-        while (i < tokens.Length)
-        {
-            int lineStart = n;
-            SyntaxToken? comment = null;
-            bool indented = false;
-            for (; i < tokens.Length && tokens[i].Kind != TokenKind.Newline; i++)
-            {
-                var t = tokens[i];
-                if (t.Kind == TokenKind.Comment) { if (n > lineStart) comment = t; continue; }
-                if (t.Kind == TokenKind.Whitespace) { if (n == lineStart && (t.Flags & TokenFlags.Indented) != 0) indented = true; continue; }
-                if (t.Kind == TokenKind.TriviaNewline) continue;
-                significant[n++] = t;
-            }
-            i++; // the newline
-            int count = n - lineStart;
-            if (count == 0) continue;
-            var first = significant[lineStart].Kind;
-            if (indented && groups.Count > 0)
-            {
-                var previous = groups[^1];
-                bool continues = significant[previous.Start].Kind != TokenKind.Heading && (
-                    first is TokenKind.Source or TokenKind.Assumed or TokenKind.Accepted or TokenKind.Valid or TokenKind.Require
-                        or TokenKind.Where or TokenKind.Row
-                    || (first is TokenKind.Caution or TokenKind.Notice or TokenKind.Warning && previous.IsFunction));
-                if (continues)
-                {
-                    groups[^1] = previous with { Count = previous.Count + count };
-                    continue;
-                }
-            }
-            bool isFunction = first == TokenKind.Identifier && count > 1 && significant[lineStart + 1].Kind == TokenKind.LParen;
-            groups.Add(new StatementGroup(lineStart, count, comment, isFunction));
-        }
-        return groups;
     }
 
     private static StatementSyntax? ParseStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, SyntaxToken? comment, List<Diagnostic> diagnostics, StringPool pool)
