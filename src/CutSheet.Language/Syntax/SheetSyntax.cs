@@ -10,16 +10,12 @@ namespace CutSheet.Language.Syntax;
 /// </summary>
 public sealed class SheetSyntax
 {
-    /// <summary>The tokens without whitespace, as the parser read them.</summary>
-    private readonly SyntaxToken[] _tokensWithoutWhitespace;
-
-    /// <summary>Every token, made from <see cref="_tokensWithoutWhitespace"/> when first asked for.</summary>
+    /// <summary>Every token, made when first asked for.</summary>
     private SyntaxToken[]? _tokens;
 
-    internal SheetSyntax(SourceText source, SyntaxToken[] tokensWithoutWhitespace, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
+    internal SheetSyntax(SourceText source, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
     {
         Source = source;
-        _tokensWithoutWhitespace = tokensWithoutWhitespace;
         Statements = statements;
         Diagnostics = diagnostics;
     }
@@ -27,12 +23,13 @@ public sealed class SheetSyntax
     public SourceText Source { get; }
 
     /// <summary>
-    /// Every token, whitespace included, exactly as <see cref="Tokenizer.Tokenize(string)"/> gives them.
-    /// Only the editor asks for them, so the whitespace tokens (half of all) are put back on first use,
-    /// not stored by every parse. Two threads asking at once may both build the list; one is kept.
+    /// Every token, whitespace included, as <see cref="Tokenizer.Tokenize(string)"/> gives them. Only the
+    /// editor asks for them, so the parse does not keep them (it reads the significant tokens from a
+    /// pooled buffer): the text is tokenized again on first use. Two threads asking at once may both
+    /// tokenize; one list is kept.
     /// </summary>
     public IReadOnlyList<SyntaxToken> Tokens =>
-        _tokens ?? Interlocked.CompareExchange(ref _tokens, WhitespaceTokens.Restore(_tokensWithoutWhitespace, Source.Length), null) ?? _tokens;
+        _tokens ?? Interlocked.CompareExchange(ref _tokens, Tokenizer.Tokenize(Source.Text), null) ?? _tokens;
 
     public IReadOnlyList<StatementSyntax> Statements { get; }
 

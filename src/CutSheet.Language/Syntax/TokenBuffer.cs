@@ -6,8 +6,9 @@ namespace CutSheet.Language.Syntax;
 /// The tokenizer's growing run of tokens, kept in an array rented from the shared pool, and copied
 /// once into an array of the exact size at the end. A list sized from a guess used to grow into a
 /// fresh large-object-heap array on a long sheet and then be copied again, three large arrays per
-/// sheet, each zeroed. A mutable struct: use it through a local variable only, never a copy, and
-/// hand the array back with <see cref="Release"/>.
+/// sheet, each zeroed. A mutable struct: keep one owner at a time (a local variable, or the caller
+/// it is returned to), and hand the array back with <see cref="Release"/>; should the owner throw
+/// first, the array is simply not handed back and the collector takes it.
 /// </summary>
 internal struct TokenBuffer
 {
@@ -27,6 +28,8 @@ internal struct TokenBuffer
         if (_count == _items.Length) Grow();
         _items[_count++] = token;
     }
+
+    public readonly ReadOnlySpan<SyntaxToken> AsSpan() => _items.AsSpan(0, _count);
 
     /// <summary>The tokens in a new array of their exact count.</summary>
     public readonly SyntaxToken[] ToArray() => _items.AsSpan(0, _count).ToArray();

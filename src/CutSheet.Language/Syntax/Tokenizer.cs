@@ -13,15 +13,19 @@ namespace CutSheet.Language.Syntax;
 public static class Tokenizer
 {
     /// <summary>Every token of the text, whitespace included, so that they concatenate back to it.</summary>
-    public static SyntaxToken[] Tokenize(string text) => Tokenize(text, keepWhitespace: true);
+    public static SyntaxToken[] Tokenize(string text)
+    {
+        var tokens = Scan(text, keepWhitespace: true);
+        var result = tokens.ToArray();
+        tokens.Release();
+        return result;
+    }
 
     /// <summary>
-    /// The tokens of the text; without whitespace when <paramref name="keepWhitespace"/> is false.
-    /// Whitespace is half of all tokens and the parser never needs it: every gap between the
-    /// remaining tokens is exactly one whitespace token, which <see cref="WhitespaceTokens.Restore"/>
-    /// puts back when the full list is asked for.
+    /// The tokens of the text in a pooled buffer that the caller releases; without whitespace when
+    /// <paramref name="keepWhitespace"/> is false. Whitespace is half of all tokens and the parser never needs it.
     /// </summary>
-    internal static SyntaxToken[] Tokenize(string text, bool keepWhitespace)
+    internal static TokenBuffer Scan(string text, bool keepWhitespace)
     {
         // Sheets average one token per 2.3 characters with whitespace and one per 4.6 without; the
         // buffer is pooled, so a generous first guess costs nothing.
@@ -190,10 +194,7 @@ public static class Tokenizer
             }
             Add(kind, start, pos);
         }
-        // Should anything above throw, the rented array is simply not handed back: the collector takes it.
-        var result = tokens.ToArray();
-        tokens.Release();
-        return result;
+        return tokens;
 
         void AddUnit(string text, ref int pos, bool afterAs)
         {

@@ -27,17 +27,6 @@ public class LosslessRoundTripTests
         Assert.True(bytes.AsSpan().SequenceEqual(again), $"{relativePath}: {bytes.Length} bytes in, {again.Length} bytes printed");
     }
 
-    /// <summary>
-    /// The parser keeps no whitespace tokens and puts them back when <see cref="SheetSyntax.Tokens"/> is
-    /// first read: the list must be the tokenizer's own, kind, span and flags alike.
-    /// </summary>
-    [Theory, MemberData(nameof(Files))]
-    public void TokensAreTheTokenizers(string relativePath)
-    {
-        string text = SheetCorpus.Decode(File.ReadAllBytes(Path.Combine(RepoPaths.Root, relativePath)));
-        Assert.Equal(Tokenizer.Tokenize(text), SheetSyntax.Parse(text).Tokens);
-    }
-
     /// <summary>The sets the theory walks are really there (examples may still be empty).</summary>
     [Fact]
     public void GoldenInputsAndLibrarySheetsAreFound()

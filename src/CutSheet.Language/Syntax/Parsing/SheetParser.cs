@@ -23,22 +23,23 @@ internal static class SheetParser
 
     public static SheetSyntax Parse(SourceText source)
     {
-        var tokens = Tokenizer.Tokenize(source.Text, keepWhitespace: false);
+        // Tokens and significant tokens are needed only while parsing (no node keeps them), so both
+        // live in pooled arrays; should parsing throw, they are simply not handed back.
+        var tokens = Tokenizer.Scan(source.Text, keepWhitespace: false);
+        var significant = ArrayPool<SyntaxToken>.Shared.Rent(Math.Max(tokens.Count, 1));
         var diagnostics = new List<Diagnostic>();
         // A statement starts a line, so the line count bounds the statement count.
         var statements = new List<StatementSyntax>(source.LineCount);
-        // The significant tokens are needed only while parsing: no node keeps them, so the array is pooled.
-        var significant = ArrayPool<SyntaxToken>.Shared.Rent(Math.Max(tokens.Length, 1));
         var pool = new StringPool();
-        var groups = new StatementGroups(tokens, significant);
+        var groups = new StatementGroups(tokens.AsSpan(), significant);
         while (groups.MoveNext(out var group))
         {
             var statement = ParseStatement(source, significant.AsSpan(group.Start, group.Count), group.Comment, diagnostics, pool);
             if (statement is not null) statements.Add(statement);
         }
-        // Should parsing throw, the rented array is simply not handed back: the collector takes it.
         ArrayPool<SyntaxToken>.Shared.Return(significant);
-        return new SheetSyntax(source, tokens, statements, diagnostics);
+        tokens.Release();
+        return new SheetSyntax(source, statements, diagnostics);
     }
 
     private static StatementSyntax? ParseStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, SyntaxToken? comment, List<Diagnostic> diagnostics, StringPool pool)
