@@ -335,7 +335,10 @@ public static class Tokenizer
         char.IsLetterOrDigit(c) || c is '_' or '°' or 'º' or '˚' or 'µ' or 'μ' or '%' or '‰' or 'Ω' or '·' or '⋅' or '∙' or '*' or '/'
         || Units.Superscript.IsSuperscriptChar(c);
 
-    public static bool IsSpace(char c) => c is ' ' or '\t' or '\u00A0' or '\u202F' or '\u2009' or '\u2007' or '\u2002' or '\u2003' or '\u200A' or '\uFEFF' or '\f' or '\v';
+    /// <summary>The spaces of a sheet; most characters are ASCII, so those are told apart first.</summary>
+    public static bool IsSpace(char c) => c < 128
+        ? c is ' ' or '\t' or '\f' or '\v'
+        : c is '\u00A0' or '\u202F' or '\u2009' or '\u2007' or '\u2002' or '\u2003' or '\u200A' or '\uFEFF';
 
     /// <summary>UAX #31 identifier start: letters, letter numbers and the underscore.</summary>
     public static bool IsIdentifierStart(char c)

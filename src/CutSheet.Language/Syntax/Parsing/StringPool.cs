@@ -6,13 +6,21 @@ namespace CutSheet.Language.Syntax.Parsing;
 /// </summary>
 internal sealed class StringPool
 {
-    private readonly HashSet<string> _strings = new(StringComparer.Ordinal);
+    private readonly HashSet<string> _strings;
+
+    /// <summary>Looks spans up without making a string; got once, since getting it checks the comparer's type.</summary>
+    private readonly HashSet<string>.AlternateLookup<ReadOnlySpan<char>> _lookup;
+
+    public StringPool()
+    {
+        _strings = new HashSet<string>(StringComparer.Ordinal);
+        _lookup = _strings.GetAlternateLookup<ReadOnlySpan<char>>();
+    }
 
     public string Get(string text, int start, int length)
     {
-        var lookup = _strings.GetAlternateLookup<ReadOnlySpan<char>>();
         var span = text.AsSpan(start, length);
-        if (lookup.TryGetValue(span, out var existing)) return existing;
+        if (_lookup.TryGetValue(span, out var existing)) return existing;
         var s = span.ToString();
         _strings.Add(s);
         return s;
