@@ -60,7 +60,13 @@ internal static class SheetParser
         StatementSyntax? statement = null;
         if (!fatal && first.Kind == TokenKind.Identifier && tokens.Length > 1 && tokens[1].Kind == TokenKind.Equals)
         {
-            statement = ParseDefinition(source, tokens, diagnostics, pool);
+            // The description goes straight into the definition's clauses rather than into a copy of the statement.
+            statement = ParseDefinition(source, tokens, diagnostics, pool, comment is { } d ? Description(source, d) : null);
+            if (statement is not null) return statement;
+        }
+        else if (!fatal && first.Kind == TokenKind.Check && TryParseCheck(source, tokens, pool) is { } check)
+        {
+            statement = check;
         }
         else if (!fatal)
         {
@@ -89,7 +95,8 @@ internal static class SheetParser
     /// The common statement, <c>name = expression [clauses]</c>, parsed directly (the hot path);
     /// clauses, when present, go through the statement grammar.
     /// </summary>
-    private static StatementSyntax? ParseDefinition(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics, StringPool pool)
+    private static StatementSyntax? ParseDefinition(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics, StringPool pool,
+        TextValueSyntax? description)
     {
         var name = tokens[0];
         var result = ExpressionParser.Parse(tokens, source.Text, 2, pool);
@@ -102,7 +109,7 @@ internal static class SheetParser
         if (result.Next < tokens.Length)
         {
             var rest = tokens[result.Next..];
-            var parsed = StatementGrammar.Clauses.AtEnd()(ToTokenList(source, rest));
+            var parsed = StatementGrammar.ClausesToEnd(ToTokenList(source, rest));
             if (!parsed.HasValue)
             {
                 int at = parsed.Location.IsAtEnd ? tokens.Length : result.Next + IndexAt(rest, parsed.Location.First().Span.Position.Absolute);
@@ -111,8 +118,42 @@ internal static class SheetParser
             }
             clauses = parsed.Value;
         }
+        if (description is not null) clauses = clauses with { Description = description };
         var span = TextSpan.FromBounds(name.Start, tokens[^1].End);
         return new DefinitionSyntax(span, pool.Get(source.Text, name.Start, name.Length), name.Span, result.Expression) { Clauses = clauses };
+    }
+
+    /// <summary>
+    /// <c>check condition [within tolerance] [clauses]</c> parsed directly, as the statement grammar would
+    /// parse it; null when it does not parse, and then the grammar parses it again to report the error
+    /// as it always has. A statement with a fraction or a decimal comma is left to the grammar too: the
+    /// grammar hands expressions its tokens without their flags, so its literals differ.
+    /// </summary>
+    private static StatementSyntax? TryParseCheck(SourceText source, ReadOnlySpan<SyntaxToken> tokens, StringPool pool)
+    {
+        foreach (var t in tokens)
+        {
+            if ((t.Flags & (TokenFlags.Fraction | TokenFlags.DecimalComma)) != 0) return null;
+        }
+        var condition = ExpressionParser.Parse(tokens, source.Text, 1, pool);
+        if (condition.Expression is null) return null;
+        int next = condition.Next;
+        ExpressionSyntax? tolerance = null;
+        if (next < tokens.Length && tokens[next].Kind == TokenKind.Within)
+        {
+            var within = ExpressionParser.Parse(tokens, source.Text, next + 1, pool);
+            if (within.Expression is null) return null;
+            tolerance = within.Expression;
+            next = within.Next;
+        }
+        var clauses = ClausesSyntax.Empty;
+        if (next < tokens.Length)
+        {
+            var parsed = StatementGrammar.ClausesToEnd(ToTokenList(source, tokens[next..]));
+            if (!parsed.HasValue) return null;
+            clauses = parsed.Value;
+        }
+        return new CheckSyntax(tokens[0].Span.Cover(tolerance?.Span ?? condition.Expression.Span), condition.Expression, tolerance) { Clauses = clauses };
     }
 
     private static int IndexAt(ReadOnlySpan<SyntaxToken> tokens, int start)
@@ -136,11 +177,14 @@ internal static class SheetParser
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.Unexpected(Describe(token.Kind, source.Slice(token.Span)), expected));
     }
 
-    private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment)
+    private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment) =>
+        Description(source, comment) is { } description ? statement with { Clauses = statement.Clauses with { Description = description } } : statement;
+
+    /// <summary>The text of a comment after <c>//</c>, trimmed; null when there is none.</summary>
+    private static TextValueSyntax? Description(SourceText source, SyntaxToken comment)
     {
-        string text = source.Slice(comment.Span)[2..].Trim();
-        if (text.Length == 0) return statement;
-        return statement with { Clauses = statement.Clauses with { Description = new TextValueSyntax(text, comment.Span) } };
+        var text = source.Text.AsSpan(comment.Start + 2, comment.Length - 2).Trim();
+        return text.IsEmpty ? null : new TextValueSyntax(text.ToString(), comment.Span);
     }
 
     /// <summary>Reports token-level problems; true when the statement cannot be parsed meaningfully.</summary>
@@ -219,7 +263,7 @@ internal static class SheetParser
         return fatal;
     }
 
-    private static TokenList<TokenKind> ToTokenList(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
+    internal static TokenList<TokenKind> ToTokenList(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
     {
         var list = new Token<TokenKind>[tokens.Length];
         for (int k = 0; k < tokens.Length; k++)
