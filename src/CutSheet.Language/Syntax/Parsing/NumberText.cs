@@ -24,6 +24,13 @@ internal static class NumberText
     /// </summary>
     private const int LongestCertainlyFinite = 308;
 
+    /// <summary>The powers of ten that a double holds exactly: 10⁰ to 10²².</summary>
+    private static readonly double[] ExactPowersOfTen =
+        [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];
+
+    /// <summary>Up to 15 digits the digits as an integer stay below 2⁵³, so the double holds them exactly.</summary>
+    private const int MostExactDigits = 15;
+
     /// <summary>True when the number's value is finite; the common number is not parsed at all to tell.</summary>
     public static bool IsFinite(ReadOnlySpan<char> text) =>
         (text.Length <= LongestCertainlyFinite && !text.ContainsAny(ExponentOrFraction)) || double.IsFinite(Parse(text));
@@ -48,6 +55,34 @@ internal static class NumberText
         // A decimal comma is reported by the sheet parser; where a value is still read, the comma counts as a point.
         if (text.Contains(','))
             return double.Parse(text.ToString().Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture);
-        return double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
+        return TryParseShortDecimal(text, out double value) ? value : double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
+    }
+
+    /// <summary>
+    /// Digits with an optional point, at most 15 of them: nearly every number in a sheet. The digits
+    /// as an integer and the power of ten are both exact doubles, and one IEEE division rounds
+    /// correctly, so the quotient is the correctly rounded value <see cref="double.Parse(string)"/>
+    /// gives too, without its general machinery.
+    /// </summary>
+    private static bool TryParseShortDecimal(ReadOnlySpan<char> text, out double value)
+    {
+        value = 0;
+        if (text.IsEmpty || text.Length > MostExactDigits + 1) return false;
+        ulong digits = 0;
+        int count = 0, decimals = -1;
+        foreach (char c in text)
+        {
+            if (char.IsAsciiDigit(c))
+            {
+                digits = digits * 10 + (ulong)(c - '0');
+                count++;
+                if (decimals >= 0) decimals++;
+            }
+            else if (c == '.' && decimals < 0) decimals = 0;
+            else return false;
+        }
+        if (count == 0 || count > MostExactDigits) return false;
+        value = decimals > 0 ? digits / ExactPowersOfTen[decimals] : digits;
+        return true;
     }
 }

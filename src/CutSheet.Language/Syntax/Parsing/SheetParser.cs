@@ -30,7 +30,7 @@ internal static class SheetParser
         var diagnostics = new List<Diagnostic>();
         // A statement starts a line, so the line count bounds the statement count.
         var statements = new List<StatementSyntax>(source.LineCount);
-        var pool = new StringPool();
+        var pool = new StringPool(source.LineCount);
         var groups = new StatementGroups(tokens.AsSpan(), significant);
         while (groups.MoveNext(out var group))
         {
@@ -49,11 +49,11 @@ internal static class SheetParser
 
         if (first.Kind == TokenKind.Heading)
         {
-            string text = source.Slice(first.Span);
+            var text = source.Text.AsSpan(first.Start, first.Length);
             int level = 0;
             while (level < text.Length && text[level] == '#') level++;
             if (tokens.Length > 1) diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.NotAStatement));
-            return new HeadingSyntax(first.Span, level, text[level..].Trim());
+            return new HeadingSyntax(first.Span, level, text[level..].Trim().ToString());
         }
 
         bool fatal = ScanTokens(source, tokens, diagnostics);

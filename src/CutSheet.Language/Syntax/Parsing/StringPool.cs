@@ -11,9 +11,10 @@ internal sealed class StringPool
     /// <summary>Looks spans up without making a string; got once, since getting it checks the comparer's type.</summary>
     private readonly HashSet<string>.AlternateLookup<ReadOnlySpan<char>> _lookup;
 
-    public StringPool()
+    /// <param name="capacity">About how many distinct strings to expect (a sheet's line count is a fair guess), so the set need not grow.</param>
+    public StringPool(int capacity = 0)
     {
-        _strings = new HashSet<string>(StringComparer.Ordinal);
+        _strings = new HashSet<string>(capacity, StringComparer.Ordinal);
         _lookup = _strings.GetAlternateLookup<ReadOnlySpan<char>>();
     }
 
