@@ -33,11 +33,14 @@ internal static class NumberText
 
     /// <summary>True when the number's value is finite; the common number is not parsed at all to tell.</summary>
     public static bool IsFinite(ReadOnlySpan<char> text) =>
-        (text.Length <= LongestCertainlyFinite && !text.ContainsAny(ExponentOrFraction)) || double.IsFinite(Parse(text));
+        TryParseShortDecimal(text, out _) || (text.Length <= LongestCertainlyFinite && !text.ContainsAny(ExponentOrFraction))
+        || double.IsFinite(Parse(text));
 
     /// <summary>The value of a number's text, a fraction or mixed number included.</summary>
     public static double Parse(ReadOnlySpan<char> text)
     {
+        // Nearly every number is a short decimal; any other character (a space, a slash, an exponent) sends it on.
+        if (TryParseShortDecimal(text, out double value)) return value;
         int space = text.IndexOfAny(MixedNumberSpaces);
         if (space > 0)
         {
@@ -55,11 +58,11 @@ internal static class NumberText
         // A decimal comma is reported by the sheet parser; where a value is still read, the comma counts as a point.
         if (text.Contains(','))
             return double.Parse(text.ToString().Replace(',', '.'), NumberStyles.Float, CultureInfo.InvariantCulture);
-        return TryParseShortDecimal(text, out double value) ? value : double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
+        return double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
     }
 
     /// <summary>
-    /// Digits with an optional point, at most 15 of them: nearly every number in a sheet. The digits
+    /// Digits with an optional point (a trailing one too), at most 15 digits: nearly every number in a sheet. The digits
     /// as an integer and the power of ten are both exact doubles, and one IEEE division rounds
     /// correctly, so the quotient is the correctly rounded value <see cref="double.Parse(string)"/>
     /// gives too, without its general machinery.
