@@ -143,7 +143,8 @@ public static class Tokenizer
                 continue;
             }
 
-            if (Units.Superscript.IsSuperscriptChar(c))
+            // Superscripts are all outside ASCII; the test keeps the string search off operators.
+            if (c >= 128 && Units.Superscript.IsSuperscriptChar(c))
             {
                 pos++;
                 while (pos < text.Length && Units.Superscript.DigitValue(text[pos]) >= 0) pos++;
@@ -334,7 +335,7 @@ public static class Tokenizer
 
     private static bool IsUnitChar(char c) =>
         char.IsLetterOrDigit(c) || c is '_' or '°' or 'º' or '˚' or 'µ' or 'μ' or '%' or '‰' or 'Ω' or '·' or '⋅' or '∙' or '*' or '/'
-        || Units.Superscript.IsSuperscriptChar(c);
+        || (c >= 128 && Units.Superscript.IsSuperscriptChar(c));
 
     /// <summary>The spaces of a sheet; most characters are ASCII, so those are told apart first.</summary>
     /// <remarks>Inlined: the tokenizer asks it about nearly every character, and the call cost more than the test.</remarks>
@@ -344,9 +345,12 @@ public static class Tokenizer
         : c is '\u00A0' or '\u202F' or '\u2009' or '\u2007' or '\u2002' or '\u2003' or '\u200A' or '\uFEFF';
 
     /// <summary>UAX #31 identifier start: letters, letter numbers and the underscore.</summary>
-    public static bool IsIdentifierStart(char c)
+    /// <remarks>The ASCII test is inlined into the tokenizer's loops; other characters take a call.</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static bool IsIdentifierStart(char c) => c < 128 ? char.IsAsciiLetter(c) || c == '_' : IsNonAsciiIdentifierStart(c);
+
+    private static bool IsNonAsciiIdentifierStart(char c)
     {
-        if (c < 128) return char.IsAsciiLetter(c) || c == '_';
         if (c is 'µ' or 'º' or '°') return false;
         return CharUnicodeInfo.GetUnicodeCategory(c) switch
         {
@@ -357,10 +361,13 @@ public static class Tokenizer
     }
 
     /// <summary>UAX #31 identifier continue: starts plus marks, digits and connector punctuation.</summary>
-    public static bool IsIdentifierPart(char c)
+    /// <remarks>The ASCII test is inlined into the tokenizer's loops; other characters take a call.</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static bool IsIdentifierPart(char c) => c < 128 ? char.IsAsciiLetterOrDigit(c) || c == '_' : IsNonAsciiIdentifierPart(c);
+
+    private static bool IsNonAsciiIdentifierPart(char c)
     {
-        if (c < 128) return char.IsAsciiLetterOrDigit(c) || c == '_';
-        if (IsIdentifierStart(c)) return true;
+        if (IsNonAsciiIdentifierStart(c)) return true;
         return CharUnicodeInfo.GetUnicodeCategory(c) is UnicodeCategory.NonSpacingMark or UnicodeCategory.SpacingCombiningMark
             or UnicodeCategory.DecimalDigitNumber or UnicodeCategory.ConnectorPunctuation;
     }
