@@ -38,7 +38,26 @@ public class NumberTextTests
     [InlineData("3/8", 0.375)]
     [InlineData("1 1/4", 1.25)]
     [InlineData("1\u00A01/2", 1.5)]
+    [InlineData("1\u20071/4", 1.25)]
+    [InlineData("1\u2003 1/2", 1.5)]
+    [InlineData("2\uFEFF\uFEFF3/4", 2.75)]
     public void FractionIsItsQuotient(string text, double expected) => Assert.Equal(expected, NumberText.Parse(text));
+
+    /// <summary>
+    /// The tokenizer reads a mixed number across any space it knows (a figure space, an em space),
+    /// so the number must read across it too: parsing such a line used to throw.
+    /// </summary>
+    [Theory]
+    [InlineData("x = 1\u20071/4 in\n", 1.25)]
+    [InlineData("x = 1\u20031/2 in\n", 1.5)]
+    public void MixedNumberAcrossAnySpaceParses(string text, double expected)
+    {
+        var syntax = Syntax.SheetSyntax.Parse(text);
+        var definition = Assert.IsType<Syntax.Nodes.DefinitionSyntax>(Assert.Single(syntax.Statements));
+        var literal = Assert.IsType<Syntax.Nodes.QuantityLiteralSyntax>(definition.Value);
+        Assert.Equal(expected, literal.Number);
+        Assert.True(literal.IsFraction);
+    }
 
     /// <summary>Random digit strings with and without a point, 1 to 20 characters: the same bits as the reference.</summary>
     [Fact]

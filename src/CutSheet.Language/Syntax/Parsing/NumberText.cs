@@ -12,8 +12,13 @@ namespace CutSheet.Language.Syntax.Parsing;
 /// </summary>
 internal static class NumberText
 {
-    /// <summary>The spaces that separate the whole part of a mixed number from its fraction.</summary>
-    private static readonly SearchValues<char> MixedNumberSpaces = SearchValues.Create(" \t\u00A0\u202F\u2009");
+    /// <summary>
+    /// The spaces that may separate the whole part of a mixed number from its fraction: every space
+    /// <see cref="Tokenizer.IsSpace"/> admits there, since the tokenizer decides what a mixed number is.
+    /// </summary>
+    private const string MixedNumberSpaceChars = " \t\f\v\u00A0\u202F\u2009\u2007\u2002\u2003\u200A\uFEFF";
+
+    private static readonly SearchValues<char> MixedNumberSpaces = SearchValues.Create(MixedNumberSpaceChars);
 
     /// <summary>What can take a number out of the finite range: an exponent, or a fraction's zero denominator.</summary>
     private static readonly SearchValues<char> ExponentOrFraction = SearchValues.Create("eE/");
@@ -45,7 +50,7 @@ internal static class NumberText
         if (space > 0)
         {
             double whole = Parse(text[..space]);
-            return whole + Parse(text[(space + 1)..].Trim());
+            return whole + Parse(text[(space + 1)..].Trim(MixedNumberSpaceChars));
         }
         int slash = text.IndexOf('/');
         if (slash > 0)
