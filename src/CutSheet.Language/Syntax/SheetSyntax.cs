@@ -10,17 +10,26 @@ namespace CutSheet.Language.Syntax;
 /// </summary>
 public sealed class SheetSyntax
 {
-    internal SheetSyntax(SourceText source, SyntaxToken[] tokens, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
+    /// <summary>Every token, made when first asked for.</summary>
+    private SyntaxToken[]? _tokens;
+
+    internal SheetSyntax(SourceText source, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
     {
         Source = source;
-        Tokens = tokens;
         Statements = statements;
         Diagnostics = diagnostics;
     }
 
     public SourceText Source { get; }
 
-    public IReadOnlyList<SyntaxToken> Tokens { get; }
+    /// <summary>
+    /// Every token, whitespace included, as <see cref="Tokenizer.Tokenize(string)"/> gives them. Only the
+    /// editor asks for them, so the parse does not keep them (it reads the significant tokens from a
+    /// pooled buffer): the text is tokenized again on first use. Two threads asking at once may both
+    /// tokenize; one list is kept.
+    /// </summary>
+    public IReadOnlyList<SyntaxToken> Tokens =>
+        _tokens ?? Interlocked.CompareExchange(ref _tokens, Tokenizer.Tokenize(Source.Text), null) ?? _tokens;
 
     public IReadOnlyList<StatementSyntax> Statements { get; }
 

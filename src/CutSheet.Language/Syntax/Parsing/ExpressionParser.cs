@@ -258,7 +258,8 @@ internal ref struct ExpressionParser
         // A decimal comma or an inch/foot mark is reported by the sheet parser; the value stays unknown.
         if ((number.Flags & TokenFlags.DecimalComma) != 0 || unit is { Text: "\"" or "'" or "″" or "′" }) return new ErrorExpressionSyntax(span);
         bool fraction = (number.Flags & TokenFlags.Fraction) != 0;
-        return new QuantityLiteralSyntax(span, NumberText.Parse(text), text, number.Span, unit, fraction);
+        double value = NumberText.Parse(_text.AsSpan(number.Start, number.Length));
+        return new QuantityLiteralSyntax(span, value, text, number.Span, unit, fraction);
     }
 
     private ExpressionSyntax? ParseNameOrCall()

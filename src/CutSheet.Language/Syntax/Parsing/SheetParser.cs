@@ -1,3 +1,4 @@
+using System.Buffers;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Text;
@@ -22,64 +23,23 @@ internal static class SheetParser
 
     public static SheetSyntax Parse(SourceText source)
     {
-        var tokens = Tokenizer.Tokenize(source.Text);
+        // Tokens and significant tokens are needed only while parsing (no node keeps them), so both
+        // live in pooled arrays; should parsing throw, they are simply not handed back.
+        var tokens = Tokenizer.Scan(source.Text, keepWhitespace: false);
+        var significant = ArrayPool<SyntaxToken>.Shared.Rent(Math.Max(tokens.Count, 1));
         var diagnostics = new List<Diagnostic>();
-        var statements = new List<StatementSyntax>();
-        var significant = new SyntaxToken[tokens.Length];
-        var pool = new StringPool();
-        foreach (var group in Group(tokens, significant))
+        // A statement starts a line, so the line count bounds the statement count.
+        var statements = new List<StatementSyntax>(source.LineCount);
+        var pool = new StringPool(source.LineCount);
+        var groups = new StatementGroups(tokens.AsSpan(), significant);
+        while (groups.MoveNext(out var group))
         {
             var statement = ParseStatement(source, significant.AsSpan(group.Start, group.Count), group.Comment, diagnostics, pool);
             if (statement is not null) statements.Add(statement);
         }
-        return new SheetSyntax(source, tokens, statements, diagnostics);
-    }
-
-    /// <summary>
-    /// A statement's significant tokens, a contiguous range of the sheet's significant tokens
-    /// (line breaks and trivia dropped; indented clause lines are consecutive, so they extend the
-    /// range), and the comment on its first line, which is its description.
-    /// </summary>
-    private readonly record struct StatementGroup(int Start, int Count, SyntaxToken? Comment, bool IsFunction);
-
-    private static List<StatementGroup> Group(SyntaxToken[] tokens, SyntaxToken[] significant)
-    {
-        var groups = new List<StatementGroup>();
-        int n = 0, i = 0;
-        while (i < tokens.Length)
-        {
-            int lineStart = n;
-            SyntaxToken? comment = null;
-            bool indented = false;
-            for (; i < tokens.Length && tokens[i].Kind != TokenKind.Newline; i++)
-            {
-                var t = tokens[i];
-                if (t.Kind == TokenKind.Comment) { if (n > lineStart) comment = t; continue; }
-                if (t.Kind == TokenKind.Whitespace) { if (n == lineStart && (t.Flags & TokenFlags.Indented) != 0) indented = true; continue; }
-                if (t.Kind == TokenKind.TriviaNewline) continue;
-                significant[n++] = t;
-            }
-            i++; // the newline
-            int count = n - lineStart;
-            if (count == 0) continue;
-            var first = significant[lineStart].Kind;
-            if (indented && groups.Count > 0)
-            {
-                var previous = groups[^1];
-                bool continues = significant[previous.Start].Kind != TokenKind.Heading && (
-                    first is TokenKind.Source or TokenKind.Assumed or TokenKind.Accepted or TokenKind.Valid or TokenKind.Require
-                        or TokenKind.Where or TokenKind.Row
-                    || (first is TokenKind.Caution or TokenKind.Notice or TokenKind.Warning && previous.IsFunction));
-                if (continues)
-                {
-                    groups[^1] = previous with { Count = previous.Count + count };
-                    continue;
-                }
-            }
-            bool isFunction = first == TokenKind.Identifier && count > 1 && significant[lineStart + 1].Kind == TokenKind.LParen;
-            groups.Add(new StatementGroup(lineStart, count, comment, isFunction));
-        }
-        return groups;
+        ArrayPool<SyntaxToken>.Shared.Return(significant);
+        tokens.Release();
+        return new SheetSyntax(source, statements, diagnostics);
     }
 
     private static StatementSyntax? ParseStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, SyntaxToken? comment, List<Diagnostic> diagnostics, StringPool pool)
@@ -89,18 +49,24 @@ internal static class SheetParser
 
         if (first.Kind == TokenKind.Heading)
         {
-            string text = source.Slice(first.Span);
+            var text = source.Text.AsSpan(first.Start, first.Length);
             int level = 0;
             while (level < text.Length && text[level] == '#') level++;
             if (tokens.Length > 1) diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.NotAStatement));
-            return new HeadingSyntax(first.Span, level, text[level..].Trim());
+            return new HeadingSyntax(first.Span, level, text[level..].Trim().ToString());
         }
 
         bool fatal = ScanTokens(source, tokens, diagnostics);
         StatementSyntax? statement = null;
         if (!fatal && first.Kind == TokenKind.Identifier && tokens.Length > 1 && tokens[1].Kind == TokenKind.Equals)
         {
-            statement = ParseDefinition(source, tokens, diagnostics, pool);
+            // The description goes straight into the definition's clauses rather than into a copy of the statement.
+            statement = ParseDefinition(source, tokens, diagnostics, pool, comment is { } d ? Description(source, d) : null);
+            if (statement is not null) return statement;
+        }
+        else if (!fatal && first.Kind == TokenKind.Check && TryParseCheck(source, tokens, pool) is { } check)
+        {
+            statement = check;
         }
         else if (!fatal)
         {
@@ -129,7 +95,8 @@ internal static class SheetParser
     /// The common statement, <c>name = expression [clauses]</c>, parsed directly (the hot path);
     /// clauses, when present, go through the statement grammar.
     /// </summary>
-    private static StatementSyntax? ParseDefinition(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics, StringPool pool)
+    private static StatementSyntax? ParseDefinition(SourceText source, ReadOnlySpan<SyntaxToken> tokens, List<Diagnostic> diagnostics, StringPool pool,
+        TextValueSyntax? description)
     {
         var name = tokens[0];
         var result = ExpressionParser.Parse(tokens, source.Text, 2, pool);
@@ -142,7 +109,7 @@ internal static class SheetParser
         if (result.Next < tokens.Length)
         {
             var rest = tokens[result.Next..];
-            var parsed = StatementGrammar.Clauses.AtEnd()(ToTokenList(source, rest));
+            var parsed = StatementGrammar.ClausesToEnd(ToTokenList(source, rest));
             if (!parsed.HasValue)
             {
                 int at = parsed.Location.IsAtEnd ? tokens.Length : result.Next + IndexAt(rest, parsed.Location.First().Span.Position.Absolute);
@@ -151,8 +118,42 @@ internal static class SheetParser
             }
             clauses = parsed.Value;
         }
+        if (description is not null) clauses = clauses with { Description = description };
         var span = TextSpan.FromBounds(name.Start, tokens[^1].End);
         return new DefinitionSyntax(span, pool.Get(source.Text, name.Start, name.Length), name.Span, result.Expression) { Clauses = clauses };
+    }
+
+    /// <summary>
+    /// <c>check condition [within tolerance] [clauses]</c> parsed directly, as the statement grammar would
+    /// parse it; null when it does not parse, and then the grammar parses it again to report the error
+    /// as it always has. A statement with a fraction or a decimal comma is left to the grammar too: the
+    /// grammar hands expressions its tokens without their flags, so its literals differ.
+    /// </summary>
+    private static StatementSyntax? TryParseCheck(SourceText source, ReadOnlySpan<SyntaxToken> tokens, StringPool pool)
+    {
+        foreach (var t in tokens)
+        {
+            if ((t.Flags & (TokenFlags.Fraction | TokenFlags.DecimalComma)) != 0) return null;
+        }
+        var condition = ExpressionParser.Parse(tokens, source.Text, 1, pool);
+        if (condition.Expression is null) return null;
+        int next = condition.Next;
+        ExpressionSyntax? tolerance = null;
+        if (next < tokens.Length && tokens[next].Kind == TokenKind.Within)
+        {
+            var within = ExpressionParser.Parse(tokens, source.Text, next + 1, pool);
+            if (within.Expression is null) return null;
+            tolerance = within.Expression;
+            next = within.Next;
+        }
+        var clauses = ClausesSyntax.Empty;
+        if (next < tokens.Length)
+        {
+            var parsed = StatementGrammar.ClausesToEnd(ToTokenList(source, tokens[next..]));
+            if (!parsed.HasValue) return null;
+            clauses = parsed.Value;
+        }
+        return new CheckSyntax(tokens[0].Span.Cover(tolerance?.Span ?? condition.Expression.Span), condition.Expression, tolerance) { Clauses = clauses };
     }
 
     private static int IndexAt(ReadOnlySpan<SyntaxToken> tokens, int start)
@@ -176,11 +177,14 @@ internal static class SheetParser
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.Unexpected(Describe(token.Kind, source.Slice(token.Span)), expected));
     }
 
-    private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment)
+    private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment) =>
+        Description(source, comment) is { } description ? statement with { Clauses = statement.Clauses with { Description = description } } : statement;
+
+    /// <summary>The text of a comment after <c>//</c>, trimmed; null when there is none.</summary>
+    private static TextValueSyntax? Description(SourceText source, SyntaxToken comment)
     {
-        string text = source.Slice(comment.Span)[2..].Trim();
-        if (text.Length == 0) return statement;
-        return statement with { Clauses = statement.Clauses with { Description = new TextValueSyntax(text, comment.Span) } };
+        var text = source.Text.AsSpan(comment.Start + 2, comment.Length - 2).Trim();
+        return text.IsEmpty ? null : new TextValueSyntax(text.ToString(), comment.Span);
     }
 
     /// <summary>Reports token-level problems; true when the statement cannot be parsed meaningfully.</summary>
@@ -216,7 +220,7 @@ internal static class SheetParser
                         diagnostics.Add(Diagnostic.Error(DiagnosticCodes.FootMark, t.Span, DiagnosticMessages.FootMark,
                             new Fix("write ft", [new TextEdit(t.Span, " ft")])));
                     break;
-                case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) == 0 && !double.IsFinite(NumberText.Parse(source.Slice(t.Span))):
+                case TokenKind.Number when (t.Flags & TokenFlags.DecimalComma) == 0 && !NumberText.IsFinite(source.Text.AsSpan(t.Start, t.Length)):
                     diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NotFinite, t.Span, DiagnosticMessages.NumberNotFinite(source.Slice(t.Span))));
                     fatal = true;
                     break;
@@ -259,7 +263,7 @@ internal static class SheetParser
         return fatal;
     }
 
-    private static TokenList<TokenKind> ToTokenList(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
+    internal static TokenList<TokenKind> ToTokenList(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
     {
         var list = new Token<TokenKind>[tokens.Length];
         for (int k = 0; k < tokens.Length; k++)

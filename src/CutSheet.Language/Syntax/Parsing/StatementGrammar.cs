@@ -71,6 +71,9 @@ internal static class StatementGrammar
     public static readonly TokenListParser<TokenKind, ClausesSyntax> Clauses =
         Clause.Many().Select(BuildClauses);
 
+    /// <summary><see cref="Clauses"/> that must reach the end of the tokens: what follows a directly parsed statement.</summary>
+    public static readonly TokenListParser<TokenKind, ClausesSyntax> ClausesToEnd = Clauses.AtEnd();
+
     private static readonly TokenListParser<TokenKind, StatementSyntax> Definition =
         from b in Binding
         from clauses in Clauses
@@ -172,19 +175,30 @@ internal static class StatementGrammar
         from clauses in Clauses
         select (StatementSyntax)new KindDeclarationSyntax(Between(keyword, basis), name.ToStringValue(), Of(name), basis.ToStringValue(), Of(basis)) { Clauses = clauses };
 
-    /// <summary>The parser for a statement that starts with the given tokens, or null when no statement starts so.</summary>
+    private static readonly TokenListParser<TokenKind, StatementSyntax> FunctionToEnd = Function.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> DefinitionToEnd = Definition.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> CheckToEnd = Check.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> CautionToEnd = Caution.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> UseToEnd = Use.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> SheetToEnd = Sheet.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> DisplayToEnd = Display.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> ChoiceToEnd = Choice.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> TableToEnd = Table.AtEnd();
+    private static readonly TokenListParser<TokenKind, StatementSyntax> KindDeclarationToEnd = KindDeclaration.AtEnd();
+
+    /// <summary>The parser for a statement that starts with the given tokens, or null when no statement starts so; built once.</summary>
     public static TokenListParser<TokenKind, StatementSyntax>? For(TokenKind first, TokenKind second) => first switch
     {
-        TokenKind.Identifier when second == TokenKind.LParen => Function.AtEnd(),
-        TokenKind.Identifier when second == TokenKind.Equals => Definition.AtEnd(),
-        TokenKind.Check => Check.AtEnd(),
-        TokenKind.Notice or TokenKind.Caution or TokenKind.Warning => Caution.AtEnd(),
-        TokenKind.Use => Use.AtEnd(),
-        TokenKind.Sheet => Sheet.AtEnd(),
-        TokenKind.Display => Display.AtEnd(),
-        TokenKind.Choice => Choice.AtEnd(),
-        TokenKind.Table => Table.AtEnd(),
-        TokenKind.KindKeyword => KindDeclaration.AtEnd(),
+        TokenKind.Identifier when second == TokenKind.LParen => FunctionToEnd,
+        TokenKind.Identifier when second == TokenKind.Equals => DefinitionToEnd,
+        TokenKind.Check => CheckToEnd,
+        TokenKind.Notice or TokenKind.Caution or TokenKind.Warning => CautionToEnd,
+        TokenKind.Use => UseToEnd,
+        TokenKind.Sheet => SheetToEnd,
+        TokenKind.Display => DisplayToEnd,
+        TokenKind.Choice => ChoiceToEnd,
+        TokenKind.Table => TableToEnd,
+        TokenKind.KindKeyword => KindDeclarationToEnd,
         _ => null,
     };
 
