@@ -32,6 +32,14 @@ internal static class ExpressionGrammar
     public static TokenListParser<TokenKind, ExpressionSyntax?> After(TokenKind keyword) =>
         AfterCache[(int)keyword] ??= TokenParsers.Of(keyword).IgnoreThen(Expression).Select(e => (ExpressionSyntax?)e).OptionalOrDefault();
 
+    /// <summary>
+    /// Superpower's tokens carry no flags, so a number's are read again from its text: a comma
+    /// inside a number token can only be a decimal comma, and a slash only a fraction. Without
+    /// them a clause or function body would read <c>1,5</c> as 1.5 where a definition reports it.
+    /// </summary>
+    private static TokenFlags NumberFlags(ReadOnlySpan<char> text) =>
+        text.Contains(',') ? TokenFlags.DecimalComma : text.Contains('/') ? TokenFlags.Fraction : TokenFlags.None;
+
     private static TokenListParserResult<TokenKind, ExpressionSyntax> ParseExpression(TokenList<TokenKind> input)
     {
         var tokens = new List<SyntaxToken>();
@@ -39,7 +47,8 @@ internal static class ExpressionGrammar
         foreach (var t in input)
         {
             source ??= t.Span.Source;
-            tokens.Add(new SyntaxToken(t.Kind, t.Span.Position.Absolute, t.Span.Length));
+            var flags = t.Kind == TokenKind.Number ? NumberFlags(t.Span.Source.AsSpan(t.Span.Position.Absolute, t.Span.Length)) : TokenFlags.None;
+            tokens.Add(new SyntaxToken(t.Kind, t.Span.Position.Absolute, t.Span.Length, flags));
         }
         var result = ExpressionParser.Parse(System.Runtime.InteropServices.CollectionsMarshal.AsSpan(tokens), source ?? "", 0, new StringPool());
         int consumed = result.Expression is null ? result.ErrorIndex : result.Next;
