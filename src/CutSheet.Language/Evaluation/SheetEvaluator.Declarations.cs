@@ -11,37 +11,48 @@ internal sealed partial class SheetEvaluator
     /// <summary>The line where each of the sheet's own names was first declared.</summary>
     private readonly Dictionary<string, int> _declaredAt = new(StringComparer.Ordinal);
 
+    /// <summary>The symbol each definition statement declared, by statement index (null where the name was refused).</summary>
+    private DefinitionSymbol?[] _definitionAt = [];
+
     /// <summary>Declares the sheet's own names; a name is declared once, and never over an import or a constant.</summary>
     private void Declare()
     {
+        // Sized once from the statement count: a large sheet would otherwise rehash them a dozen times.
+        _scope.Definitions.EnsureCapacity(_scope.Definitions.Count + _definitionCount);
+        _declaredAt.EnsureCapacity(_definitionCount);
+        _definitionAt = new DefinitionSymbol?[_syntax.Statements.Count];
         for (int i = 0; i < _syntax.Statements.Count; i++)
         {
             var statement = _syntax.Statements[i];
-            int line = LineOf(statement.Span);
+            int line = _statementLines[i];
             switch (statement)
             {
                 case DefinitionSyntax d:
-                    if (CanDeclare(d.Name, d.NameSpan))
-                        _scope.Definitions[d.Name] = new DefinitionSymbol(d, i, line, _source.Path);
+                    if (CanDeclare(d.Name, d.NameSpan, LineWithin(i, d.NameSpan)))
+                    {
+                        var symbol = new DefinitionSymbol(d, i, line, _source.Path);
+                        _scope.Definitions[d.Name] = symbol;
+                        _definitionAt[i] = symbol;
+                    }
                     break;
                 case FunctionSyntax fn:
-                    if (CanDeclare(fn.Name, fn.NameSpan))
+                    if (CanDeclare(fn.Name, fn.NameSpan, LineWithin(i, fn.NameSpan)))
                         _scope.Functions[fn.Name] = new FunctionSymbol(fn, _scope, line);
                     break;
                 case ChoiceSyntax c:
-                    if (!CanDeclare(c.Name, c.NameSpan)) break;
+                    if (!CanDeclare(c.Name, c.NameSpan, LineWithin(i, c.NameSpan))) break;
                     var type = new ChoiceType(c.Name, _source.Path);
                     _scope.Choices[c.Name] = type;
                     foreach (var (option, span) in c.Options)
                     {
-                        if (!CanDeclare(option, span)) continue;
+                        if (!CanDeclare(option, span, LineWithin(i, span))) continue;
                         var o = new ChoiceOption(type, option, type.Options.Count);
                         type.Options.Add(o);
                         _scope.Options[option] = o;
                     }
                     break;
                 case TableSyntax t:
-                    if (CanDeclare(t.Name, t.NameSpan))
+                    if (CanDeclare(t.Name, t.NameSpan, LineWithin(i, t.NameSpan)))
                         _scope.Tables[t.Name] = new TableSymbol(t, null, _source.Path);
                     break;
                 case KindDeclarationSyntax k:
@@ -52,14 +63,14 @@ internal sealed partial class SheetEvaluator
                         _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, k.BaseSpan, DiagnosticMessages.UnknownKind(k.Base, ExpressionEvaluator.Suggest(k.Base, candidates))));
                         break;
                     }
-                    if (CanDeclare(k.Name, k.NameSpan))
+                    if (CanDeclare(k.Name, k.NameSpan, LineWithin(i, k.NameSpan)))
                         _scope.Kinds[k.Name] = new Kind(k.Name, basis.Dimension, k.Clauses.Description?.Value ?? $"{k.Name.Replace('_', ' ')} (a {basis.Name.Replace('_', ' ')})", isTagged: true, basis: basis);
                     break;
             }
         }
     }
 
-    private bool CanDeclare(string name, TextSpan span)
+    private bool CanDeclare(string name, TextSpan span, int line)
     {
         if (_declaredAt.TryGetValue(name, out int firstLine))
         {
@@ -76,7 +87,7 @@ internal sealed partial class SheetEvaluator
             _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.RedefinitionOfBuiltin(name)));
             return false;
         }
-        _declaredAt[name] = LineOf(span);
+        _declaredAt[name] = line;
         return true;
     }
 

@@ -16,13 +16,13 @@ internal sealed partial class SheetEvaluator
         for (int i = 0; i < _syntax.Statements.Count; i++)
         {
             var statement = _syntax.Statements[i];
-            int line = LineOf(statement.Span);
+            int line = _statementLines[i];
             _currentLine = line;
             _sink.BeginStatement();
             CheckClauses(statement);
             StatementResult result = statement switch
             {
-                DefinitionSyntax d => EvaluateDefinition(d, line, overrides),
+                DefinitionSyntax d => EvaluateDefinition(d, line, _definitionAt[i], overrides),
                 CheckSyntax c => EvaluateCheck(c, line),
                 CautionSyntax c => EvaluateCaution(c, line),
                 TableSyntax t => EvaluateTable(t, line),

@@ -12,12 +12,13 @@ internal sealed partial class SheetEvaluator
     private ValuePresenter? _presenter;
     private ValuePresenter Presenter => _presenter ??= new ValuePresenter(_display, _scope);
 
-    private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
+    private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, DefinitionSymbol? symbol, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
     {
         var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, RecordDependencies = true };
         var value = _eval.Evaluate(d.Value, frame);
         var clauses = d.Clauses;
-        if (!_scope.Definitions.TryGetValue(d.Name, out var symbol) || symbol.Syntax != d)
+        // The symbol Declare made for this very statement; a refused redefinition has none.
+        if (symbol is null)
         {
             return new DefinitionResult(d, line, d.Name, null, null, false, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value, false);
         }

@@ -57,6 +57,7 @@ internal sealed partial class SheetEvaluator
 
     private SheetResult Run()
     {
+        MapStatementLines();
         ReadSettings();
         DeclareImports();
         Declare();
@@ -88,15 +89,16 @@ internal sealed partial class SheetEvaluator
         var units = _options.Units;
         int? digits = _options.Digits;
         var keyLines = new Dictionary<string, int>(StringComparer.Ordinal);
-        foreach (var statement in _syntax.Statements)
+        for (int i = 0; i < _syntax.Statements.Count; i++)
         {
+            var statement = _syntax.Statements[i];
             switch (statement)
             {
                 case SheetMetadataSyntax m:
                     if (keyLines.TryGetValue(m.Key, out int first))
                         _sink.Report(Diagnostic.Warning(DiagnosticCodes.Redefinition, m.KeySpan, DiagnosticMessages.Redefinition("sheet " + m.Key, first + 1)));
                     else
-                        keyLines[m.Key] = LineOf(statement.Span);
+                        keyLines[m.Key] = _statementLines[i];
                     _metadata[m.Key] = m.Value.Value;
                     break;
                 case DisplaySyntax d:
