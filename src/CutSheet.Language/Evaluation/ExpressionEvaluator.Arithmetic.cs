@@ -130,7 +130,7 @@ internal sealed partial class ExpressionEvaluator
     {
         bool offset = operand switch
         {
-            QuantityLiteralSyntax { Unit: { } u } => UnitCatalog.Default.Resolve(u.Text).Unit?.HasOffset == true,
+            QuantityLiteralSyntax { Unit: { } u } => UnitFacts.Of(u).Resolution.Unit?.HasOffset == true,
             NameSyntax { Qualifier: null } n => f.Scope.Find(n.Name) is DefinitionSymbol { DisplayUnit.HasOffset: true },
             _ => false,
         };

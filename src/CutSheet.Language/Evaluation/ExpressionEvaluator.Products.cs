@@ -215,7 +215,7 @@ internal sealed partial class ExpressionEvaluator
     private Value Convert(ConvertSyntax c, EvalFrame f)
     {
         var v = Evaluate(c.Operand, f);
-        var resolution = UnitCatalog.Default.Resolve(c.Unit.Text);
+        var resolution = UnitFacts.Of(c.Unit).Resolution;
         if (resolution.Unit is null) return UnitError(c.Unit, resolution.Error!, f);
         if (v.IsUnknown) return v;
         if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, c.Operand.Span, "a quantity", v);

@@ -85,7 +85,8 @@ internal sealed partial class ExpressionEvaluator
     private Value Literal(QuantityLiteralSyntax q, EvalFrame f)
     {
         if (q.Unit is null) return Value.Of(new Quantity(q.Number, Dimension.None));
-        var resolution = UnitCatalog.Default.Resolve(q.Unit.Text);
+        var facts = UnitFacts.Of(q.Unit);
+        var resolution = facts.Resolution;
         if (resolution.Unit is null) return UnitError(q.Unit, resolution.Error!, f);
         var unit = resolution.Unit;
         if (unit.Notes.Count > 0 && !f.CheckOnly && !f.Foreign)
@@ -94,7 +95,7 @@ internal sealed partial class ExpressionEvaluator
         }
         if (!f.Foreign && !f.CheckOnly)
         {
-            foreach (var symbol in SymbolsOf(q.Unit.Text))
+            foreach (var symbol in facts.Symbols)
             {
                 if (!_top.Definitions.ContainsKey(symbol) && !(_top.Imported.TryGetValue(symbol, out var i) && i.Symbol is DefinitionSymbol)) continue;
                 var fix = IsWord(q.Unit.Text)
@@ -110,19 +111,6 @@ internal sealed partial class ExpressionEvaluator
     {
         foreach (char c in text) if (!(char.IsLetterOrDigit(c) || c == '_')) return false;
         return true;
-    }
-
-    /// <summary>The symbols of unit text: <c>N*t</c> gives N and t.</summary>
-    private static IEnumerable<string> SymbolsOf(string unitText)
-    {
-        int i = 0;
-        while (i < unitText.Length)
-        {
-            if (!char.IsLetter(unitText[i]) && unitText[i] != '_') { i++; continue; }
-            int start = i;
-            while (i < unitText.Length && (char.IsLetterOrDigit(unitText[i]) || unitText[i] == '_')) i++;
-            yield return unitText[start..i];
-        }
     }
 
     private Value UnitError(UnitSyntax unit, UnitError error, EvalFrame f)

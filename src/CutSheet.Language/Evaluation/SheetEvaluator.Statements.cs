@@ -118,7 +118,7 @@ internal sealed partial class SheetEvaluator
     private StatementResult EvaluateTable(TableSyntax t, int line)
     {
         if (!_scope.Tables.TryGetValue(t.Name, out var table) || table.Syntax != t) return new OtherStatementResult(t, line);
-        var frame = new EvalFrame { Scope = _scope, CallSite = t.Span };
+        var frame = StatementFrame(t.Span);
         var rowLines = new Dictionary<string, int>(StringComparer.Ordinal);
         foreach (var row in t.Clauses.Rows)
         {
@@ -149,7 +149,7 @@ internal sealed partial class SheetEvaluator
 
     private StatementResult EvaluateCaution(CautionSyntax c, int line)
     {
-        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span };
+        var frame = StatementFrame(c.Span);
         var v = _eval.Evaluate(c.Condition, frame);
         bool? fired = null;
         if (v.Kind == ValueKind.Boolean)

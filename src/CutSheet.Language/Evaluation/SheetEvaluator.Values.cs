@@ -12,9 +12,19 @@ internal sealed partial class SheetEvaluator
     private ValuePresenter? _presenter;
     private ValuePresenter Presenter => _presenter ??= new ValuePresenter(_display, _scope);
 
+    private EvalFrame? _statementFrame;
+
+    /// <summary>The top-level frame for the statement about to be evaluated (one object reused for all of them).</summary>
+    private EvalFrame StatementFrame(TextSpan callSite, bool recordDependencies = false)
+    {
+        var frame = _statementFrame ??= new EvalFrame { Scope = _scope };
+        frame.StartStatement(callSite, recordDependencies);
+        return frame;
+    }
+
     private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, DefinitionSymbol? symbol, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
     {
-        var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, RecordDependencies = true };
+        var frame = StatementFrame(d.Span, recordDependencies: true);
         var value = _eval.Evaluate(d.Value, frame);
         var clauses = d.Clauses;
         // The symbol Declare made for this very statement; a refused redefinition has none.
@@ -92,11 +102,11 @@ internal sealed partial class SheetEvaluator
         string? description = c.Clauses.Description?.Value;
         if (c.Condition is not BinarySyntax { Operator: BinaryOperator.LessEqual or BinaryOperator.Less or BinaryOperator.GreaterEqual or BinaryOperator.Greater or BinaryOperator.Equal or BinaryOperator.NotEqual } cmp)
         {
-            _eval.Evaluate(c.Condition, new EvalFrame { Scope = _scope, CallSite = c.Span });
+            _eval.Evaluate(c.Condition, StatementFrame(c.Span));
             _sink.Report(Diagnostic.Error(DiagnosticCodes.NotAComparison, c.Condition.Span, DiagnosticMessages.NotAComparison));
             return new CheckResult(c, line, CheckStatus.NotEvaluated, "?", null, null, null, null, description, "not a comparison");
         }
-        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span };
+        var frame = StatementFrame(c.Span);
         var outcome = _eval.Evaluate(c.Condition, frame);
         var left = _eval.Evaluate(cmp.Left, frame);
         var right = _eval.Evaluate(cmp.Right, frame);

@@ -18,11 +18,11 @@ internal sealed class ValuePresenter(DisplaySettings settings, SheetScope scope)
         switch (root)
         {
             case ConvertSyntax c:
-                return UnitCatalog.Default.Resolve(c.Unit.Text).Unit;
+                return UnitFacts.Of(c.Unit).Resolution.Unit;
             case QuantityLiteralSyntax { Unit: { } u }:
-                return UnitCatalog.Default.Resolve(u.Text).Unit;
+                return UnitFacts.Of(u).Resolution.Unit;
             case UnarySyntax { Operator: UnaryOperator.Negate, Operand: QuantityLiteralSyntax { Unit: { } nu } }:
-                return UnitCatalog.Default.Resolve(nu.Text).Unit;
+                return UnitFacts.Of(nu).Resolution.Unit;
             case QuantityLiteralSyntax:
                 return null;
             case NameSyntax n when scope.Find(n.Name) is DefinitionSymbol { DisplayUnit: { } du } && du.Dimension.SiEquals(q.Dimension):
