@@ -147,7 +147,7 @@ internal sealed partial class ExpressionEvaluator
         bool offset = operand switch
         {
             QuantityLiteralSyntax { Unit: { } u } => UnitFacts.Of(u).Resolution.Unit?.HasOffset == true,
-            NameSyntax { Qualifier: null } n => f.Scope.Find(n.Name) is DefinitionSymbol { DisplayUnit.HasOffset: true },
+            NameSyntax { Qualifier: null } n => f.Scope.Find(n.Name) is DefinitionSymbol { DisplayUnitHasOffset: true },
             _ => false,
         };
         if (offset) Warn(f, DiagnosticCodes.OffsetArithmetic, operand.Span, DiagnosticMessages.OffsetArithmetic);

@@ -61,11 +61,17 @@ internal sealed partial class SheetEvaluator
         switch (value.Kind)
         {
             case ValueKind.Quantity:
-                var unit = overridden ? Presenter.UnitFor(o.Definition?.Value ?? d.Value, value.Quantity) : Presenter.UnitFor(d.Value, value.Quantity);
-                if (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension)) symbol.DisplayUnit = unit;
-                shown = Presenter.Present(value.Quantity, symbol.DisplayUnit ?? (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension) ? unit : null));
-                kind = value.Quantity.Kind?.Name ?? value.Quantity.Dimension.ToString();
-                break;
+                var root = overridden ? o.Definition?.Value ?? d.Value : d.Value;
+                if (Presenter.TryNamedUnit(root, value.Quantity, out var unit))
+                {
+                    if (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension)) symbol.DisplayUnit = unit;
+                }
+                else
+                {
+                    symbol.ChooseDisplayUnitLater(DeferredDisplayUnit.For(Presenter.ChoiceSystem));
+                }
+                // The shown value and the kind's name are made when the result is first read.
+                return new DefinitionResult(d, line, symbol, Presenter, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value);
             case ValueKind.List:
                 var listUnit = Presenter.UnitFor(d.Value, new Quantity(value.List!.Values.FirstOrDefault(), value.List.Dimension, value.List.Tag));
                 shown = Presenter.PresentList(value.List, listUnit);

@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Units;
 
@@ -17,7 +18,7 @@ internal sealed class UnitFacts
         Symbols = SymbolsOf(text);
     }
 
-    /// <summary>The text these facts were computed from; a node copied with other text computes its own.</summary>
+    /// <summary>The text these facts were computed from; a node copied with other text looks its own up.</summary>
     public string Text { get; }
 
     public UnitResolution Resolution { get; }
@@ -25,12 +26,23 @@ internal sealed class UnitFacts
     /// <summary>The symbols of the unit text in order: <c>N*t</c> gives N and t.</summary>
     public string[] Symbols { get; }
 
+    /// <summary>
+    /// Facts by unit text, shared by every tree: a sheet parsed afresh on each run has new nodes but
+    /// writes the same few units, so each node's first use costs one look-up and no allocation.
+    /// </summary>
+    private static readonly ConcurrentDictionary<string, UnitFacts> ByText = new(StringComparer.Ordinal);
+
     public static UnitFacts Of(UnitSyntax unit)
     {
         var facts = unit.Facts.Value;
-        if (facts is null || !ReferenceEquals(facts.Text, unit.Text))
+        if (facts is null || !string.Equals(facts.Text, unit.Text, StringComparison.Ordinal))
         {
-            facts = new UnitFacts(unit.Text);
+            if (!ByText.TryGetValue(unit.Text, out facts))
+            {
+                facts = new UnitFacts(unit.Text);
+                // Like the catalog's own cache: bounded, since unit text comes from whatever is typed.
+                if (ByText.Count < 100_000) ByText[unit.Text] = facts;
+            }
             unit.Facts.Value = facts;
         }
         return facts;
