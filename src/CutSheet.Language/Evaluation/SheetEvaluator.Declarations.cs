@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Semantics;
 using CutSheet.Language.Syntax.Nodes;
@@ -72,22 +73,27 @@ internal sealed partial class SheetEvaluator
 
     private bool CanDeclare(string name, TextSpan span, int line)
     {
-        if (_declaredAt.TryGetValue(name, out int firstLine))
+        // One hash of the name both finds an earlier declaration and reserves the slot for this one;
+        // the refusals below, all errors, give the slot back.
+        ref int firstLine = ref CollectionsMarshal.GetValueRefOrAddDefault(_declaredAt, name, out bool declared);
+        if (declared)
         {
             _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.Redefinition(name, firstLine + 1)));
             return false;
         }
+        firstLine = line;
         if (_scope.Imported.TryGetValue(name, out var imported))
         {
+            _declaredAt.Remove(name);
             _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportedRedefinition, span, DiagnosticMessages.ImportedRedefinition(name, imported.From.DisplayName)));
             return false;
         }
-        if (Builtins.Constants.ContainsKey(name) || Builtins.IsFunction(name))
+        if (Builtins.IsBuiltinName(name))
         {
+            _declaredAt.Remove(name);
             _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.RedefinitionOfBuiltin(name)));
             return false;
         }
-        _declaredAt[name] = line;
         return true;
     }
 
