@@ -87,6 +87,13 @@ internal sealed partial class ExpressionEvaluator
         }
     }
 
+    /// <summary>
+    /// A comparison whose operands the caller has already evaluated: what <see cref="Evaluate"/>
+    /// of the whole comparison would give, without evaluating the operands a second time.
+    /// </summary>
+    internal Value CompareEvaluated(BinarySyntax comparison, Value left, Value right, EvalFrame f) =>
+        Combine(comparison, comparison.Operator, comparison.Left, left, comparison.Right, right, f);
+
     private Value Combine(BinarySyntax b, BinaryOperator op, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
     {
         if (left.IsUnknown || right.IsUnknown) return Value.Unknown;

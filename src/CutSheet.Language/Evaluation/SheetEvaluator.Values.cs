@@ -113,9 +113,11 @@ internal sealed partial class SheetEvaluator
             return new CheckResult(c, line, CheckStatus.NotEvaluated, "?", null, null, null, null, description, "not a comparison");
         }
         var frame = StatementFrame(c.Span);
-        var outcome = _eval.Evaluate(c.Condition, frame);
+        // Each side once, then the comparison: the same values and diagnostics, in the same order, as
+        // evaluating the condition whole and then each side again for display.
         var left = _eval.Evaluate(cmp.Left, frame);
         var right = _eval.Evaluate(cmp.Right, frame);
+        var outcome = _eval.CompareEvaluated(cmp, left, right, frame);
         var tolerance = c.Tolerance is null ? (Value?)null : _eval.Evaluate(c.Tolerance, frame);
         string op = _source.Slice(cmp.OperatorSpan);
 
