@@ -1,44 +1,31 @@
-using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Text;
 
 namespace CutSheet.Language.Evaluation;
 
 internal sealed partial class SheetEvaluator
 {
-    /// <summary>The zero-based line of each statement, by statement index; filled once by <see cref="MapStatementLines"/>.</summary>
+    /// <summary>The zero-based line of each statement, by statement index; filled by <see cref="Declare"/>.</summary>
     private int[] _statementLines = [];
 
-    /// <summary>How many statements are definitions: the dictionaries of names are sized from it once.</summary>
-    private int _definitionCount;
-
     /// <summary>
-    /// Finds every statement's line in one forward walk over the line starts. Statements come in text
-    /// order, so each search starts where the last one ended instead of bisecting the whole sheet
-    /// for every statement in every stage.
+    /// Finds statement <paramref name="index"/>'s line, walking forward from the previous statement's:
+    /// statements come in text order, so no statement's line is searched for in the whole sheet.
     /// </summary>
-    private void MapStatementLines()
+    private int MapLine(int index, int previousLine)
     {
-        var statements = _syntax.Statements;
-        _statementLines = new int[statements.Count];
-        int line = 0;
-        int previousStart = 0;
-        for (int i = 0; i < statements.Count; i++)
+        int start = Math.Clamp(_statements[index].Span.Start, 0, _source.Length);
+        int line = previousLine;
+        if (start < _source.LineStart(line))
         {
-            var statement = statements[i];
-            int start = Math.Clamp(statement.Span.Start, 0, _source.Length);
-            if (start < previousStart)
-            {
-                // Out of text order (never produced by the parser today): fall back to the search.
-                line = LineOf(statement.Span);
-            }
-            else
-            {
-                while (line + 1 < _source.LineCount && _source.LineStart(line + 1) <= start) line++;
-            }
-            previousStart = start;
-            _statementLines[i] = line;
-            if (statement is DefinitionSyntax) _definitionCount++;
+            // Out of text order (never produced by the parser today): fall back to the search.
+            line = LineOf(_statements[index].Span);
         }
+        else
+        {
+            while (line + 1 < _source.LineCount && _source.LineStart(line + 1) <= start) line++;
+        }
+        _statementLines[index] = line;
+        return line;
     }
 
     /// <summary>The line of a span inside statement <paramref name="index"/>: its own line when it starts there, else searched.</summary>

@@ -11,11 +11,11 @@ internal sealed partial class SheetEvaluator
 {
     private List<StatementResult> EvaluateStatements()
     {
-        var results = new List<StatementResult>(_syntax.Statements.Count);
+        var results = new List<StatementResult>(_statements.Count);
         var overrides = ParseOverrides();
-        for (int i = 0; i < _syntax.Statements.Count; i++)
+        for (int i = 0; i < _statements.Count; i++)
         {
-            var statement = _syntax.Statements[i];
+            var statement = _statements[i];
             int line = _statementLines[i];
             _currentLine = line;
             _sink.BeginStatement();
@@ -62,7 +62,9 @@ internal sealed partial class SheetEvaluator
 
     private void CheckClauses(StatementSyntax statement)
     {
-        if (statement.Clauses.Keywords.Count == 0) return;
+        var clauses = statement.Clauses;
+        // Most statements share the empty clauses: no need to look further.
+        if (ReferenceEquals(clauses, ClausesSyntax.Empty) || clauses.Keywords.Count == 0) return;
         string[] allowed = statement switch
         {
             DefinitionSyntax => ["assumed", "source", "accepted"],
@@ -74,7 +76,7 @@ internal sealed partial class SheetEvaluator
             KindDeclarationSyntax => ["source"],
             _ => [],
         };
-        foreach (var (keyword, span) in statement.Clauses.Keywords)
+        foreach (var (keyword, span) in clauses.Keywords)
         {
             if (Array.IndexOf(allowed, keyword) < 0)
             {
