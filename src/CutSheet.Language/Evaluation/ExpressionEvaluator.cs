@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Display;
 using CutSheet.Language.Semantics;
@@ -93,7 +94,7 @@ internal sealed partial class ExpressionEvaluator
         {
             foreach (var note in unit.Notes) Warn(f, DiagnosticCodes.ShopSpelling, q.Unit.Span, note, severity: Severity.Information);
         }
-        if (!f.Foreign && !f.CheckOnly)
+        if (!f.Foreign && !f.CheckOnly && UnitNamesADefinition(facts))
         {
             foreach (var symbol in facts.Symbols)
             {
@@ -105,6 +106,32 @@ internal sealed partial class ExpressionEvaluator
             }
         }
         return Value.Of(new Quantity(unit.ToSi(q.Number), unit.Dimension, unit.Tag));
+    }
+
+    /// <summary>
+    /// Per unit, once the sheet's names are settled: whether one of its symbols is also a definition
+    /// here (which the literal warns about). A sheet writes the same few units thousands of times.
+    /// </summary>
+    private Dictionary<UnitFacts, bool>? _unitNamesADefinition;
+
+    /// <summary>Called once the sheet's own and imported names are all declared; from then on they do not change.</summary>
+    internal void NamesDeclared() => _unitNamesADefinition = [];
+
+    private bool UnitNamesADefinition(UnitFacts facts)
+    {
+        if (_unitNamesADefinition is null) return AnySymbolIsADefinition(facts);
+        ref bool answer = ref CollectionsMarshal.GetValueRefOrAddDefault(_unitNamesADefinition, facts, out bool known);
+        if (!known) answer = AnySymbolIsADefinition(facts);
+        return answer;
+    }
+
+    private bool AnySymbolIsADefinition(UnitFacts facts)
+    {
+        foreach (var symbol in facts.Symbols)
+        {
+            if (_top.Definitions.ContainsKey(symbol) || _top.Imported.TryGetValue(symbol, out var i) && i.Symbol is DefinitionSymbol) return true;
+        }
+        return false;
     }
 
     private static bool IsWord(string text)

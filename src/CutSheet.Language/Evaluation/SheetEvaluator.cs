@@ -64,6 +64,7 @@ internal sealed partial class SheetEvaluator
         ReadSettings();
         DeclareImports();
         Declare();
+        _eval.NamesDeclared();
         ResolveSignatures();
         RejectRecursion();
         CheckFunctionBodies();
