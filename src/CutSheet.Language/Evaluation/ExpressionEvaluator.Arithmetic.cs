@@ -204,25 +204,35 @@ internal sealed partial class ExpressionEvaluator
     /// <summary>A chain of <c>and</c> (or of <c>or</c>), evaluated flat so a long chain does not recurse.</summary>
     private Value Logical(BinarySyntax b, EvalFrame f)
     {
-        var operands = new List<ExpressionSyntax>();
-        ExpressionSyntax node = b;
-        while (node is BinarySyntax bin && bin.Operator == b.Operator)
+        int count = 1;
+        for (ExpressionSyntax n = b; n is BinarySyntax bin && bin.Operator == b.Operator; n = bin.Left) count++;
+        var operands = ArrayPool<ExpressionSyntax>.Shared.Rent(count);
+        try
         {
-            operands.Add(bin.Right);
-            node = bin.Left;
+            ExpressionSyntax node = b;
+            for (int i = count - 1; i > 0; i--)
+            {
+                var bin = (BinarySyntax)node;
+                operands[i] = bin.Right;
+                node = bin.Left;
+            }
+            operands[0] = node;
+            bool unknown = false;
+            bool result = b.Operator == BinaryOperator.And;
+            for (int i = 0; i < count; i++)
+            {
+                var operand = operands[i];
+                var v = Evaluate(operand, f);
+                if (v.IsUnknown) { unknown = true; continue; }
+                if (v.Kind != ValueKind.Boolean) return TypeError(f, operand.Span, "true or false", v);
+                result = b.Operator == BinaryOperator.And ? result && v.Boolean : result || v.Boolean;
+            }
+            return unknown ? Value.Unknown : Value.Of(result);
         }
-        operands.Add(node);
-        operands.Reverse();
-        bool unknown = false;
-        bool result = b.Operator == BinaryOperator.And;
-        foreach (var operand in operands)
+        finally
         {
-            var v = Evaluate(operand, f);
-            if (v.IsUnknown) { unknown = true; continue; }
-            if (v.Kind != ValueKind.Boolean) return TypeError(f, operand.Span, "true or false", v);
-            result = b.Operator == BinaryOperator.And ? result && v.Boolean : result || v.Boolean;
+            ArrayPool<ExpressionSyntax>.Shared.Return(operands, clearArray: true);
         }
-        return unknown ? Value.Unknown : Value.Of(result);
     }
 
     private Value Power(BinarySyntax b, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
