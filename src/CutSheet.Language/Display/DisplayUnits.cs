@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using System.Text;
 using CutSheet.Language.Units;
 
@@ -70,26 +71,50 @@ public static class DisplayUnits
         return false;
     }
 
+    /// <summary>
+    /// The candidate units of each (dimension, kind name, inch or not) seen so far: the kind's ladder
+    /// resolved, or the SI unit alone when the kind has none. Every value of a sheet is shown, so
+    /// inferring the kind, finding its ladder and resolving its units once per combination instead
+    /// of once per value matters; the entries are immutable, so the cache is shared by all threads.
+    /// </summary>
+    private static readonly ConcurrentDictionary<(Dimension Dimension, string? Kind, bool Inch), ResolvedUnit[]> Candidates = new();
+
     /// <summary>The unit to show a quantity in, or null for a plain number.</summary>
     public static ResolvedUnit? Choose(double si, Dimension dimension, Kind? tag, UnitSystem system)
     {
         if (dimension.IsNone) return null;
+        var key = (dimension, tag?.Name, system == UnitSystem.Inch);
+        if (!Candidates.TryGetValue(key, out var units))
+        {
+            units = CandidatesFor(dimension, tag, system);
+            // Kind names come from sheets too; stop remembering rather than grow without bound.
+            if (Candidates.Count < 10_000) Candidates[key] = units;
+        }
+        // The largest unit of the ladder in which the value is at least 1, else the first.
+        var best = units[0];
+        for (int i = 1; i < units.Length; i++)
+        {
+            if (Math.Abs(si) / units[i].Factor >= 1) best = units[i];
+        }
+        return best;
+    }
+
+    private static ResolvedUnit[] CandidatesFor(Dimension dimension, Kind? tag, UnitSystem system)
+    {
         // Counts and angles left over in a product (π·D·n is an angle times a length per time) are dimension
         // one: show the kind without them.
         var kind = tag ?? Kinds.Infer(dimension) ?? Kinds.Infer(WithoutCounts(dimension)) ?? Kinds.Infer(dimension.Si);
         if (kind is not null && Ladders.TryGetValue(kind.Name, out var ladder))
         {
-            var units = system == UnitSystem.Inch ? ladder.Inch : ladder.Metric;
-            ResolvedUnit? best = null;
-            foreach (var text in units)
+            var texts = system == UnitSystem.Inch ? ladder.Inch : ladder.Metric;
+            var units = new List<ResolvedUnit>(texts.Length);
+            foreach (var text in texts)
             {
-                var unit = UnitCatalog.Default.Resolve(text).Unit;
-                if (unit is null) continue;
-                if (best is null || Math.Abs(si) / unit.Factor >= 1) best = unit;
+                if (UnitCatalog.Default.Resolve(text).Unit is { } unit) units.Add(unit);
             }
-            if (best is not null) return best;
+            if (units.Count > 0) return units.ToArray();
         }
-        return SiUnit(dimension);
+        return [SiUnit(dimension)];
     }
 
     private static Dimension WithoutCounts(Dimension d)

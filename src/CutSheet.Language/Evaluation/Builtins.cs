@@ -54,6 +54,12 @@ internal static class Builtins
 
     public static bool IsFunction(string name) => FunctionSet.Contains(name);
 
+    /// <summary>Names of constants and functions together: declaring a name asks both, once per name of the sheet.</summary>
+    private static readonly HashSet<string> ReservedSet = new(Constants.Keys.Concat(FunctionSet), StringComparer.Ordinal);
+
+    /// <summary>True for the name of a built-in constant or function, which a sheet may not declare.</summary>
+    public static bool IsBuiltinName(string name) => ReservedSet.Contains(name);
+
     public static Value Call(string name, Value[] args, CallSyntax call, out (string Code, TextSpan Span, string Message)? problem)
     {
         problem = null;

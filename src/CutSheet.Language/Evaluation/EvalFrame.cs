@@ -17,8 +17,11 @@ internal sealed class EvalFrame
     /// <summary>Only dimensions matter (a function body's check, a branch not taken): no cautions, no value errors.</summary>
     public bool CheckOnly { get; init; }
 
+    private TextSpan _callSite;
+    private bool _recordDependencies;
+
     /// <summary>The span in the evaluated sheet that stands for this evaluation (a call, or the statement).</summary>
-    public TextSpan CallSite { get; init; }
+    public TextSpan CallSite { get => _callSite; init => _callSite = value; }
 
     /// <summary>True when spans belong to another sheet than the one being evaluated.</summary>
     public bool Foreign { get; init; }
@@ -27,7 +30,19 @@ internal sealed class EvalFrame
     public FunctionSymbol? Function { get; init; }
 
     /// <summary>Set when the statement refers to a definition of the evaluated sheet (so it is not an input).</summary>
-    public bool RecordDependencies { get; init; }
+    public bool RecordDependencies { get => _recordDependencies; init => _recordDependencies = value; }
 
     public bool DependsOnSheet { get; set; }
+
+    /// <summary>
+    /// Readies a top-level frame for the next statement. The evaluator keeps one such frame for
+    /// all of a sheet's statements (no frame outlives the statement it was made for), so a
+    /// sheet does not allocate a frame per line.
+    /// </summary>
+    public void StartStatement(TextSpan callSite, bool recordDependencies)
+    {
+        _callSite = callSite;
+        _recordDependencies = recordDependencies;
+        DependsOnSheet = false;
+    }
 }

@@ -1,3 +1,4 @@
+using System.Buffers;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Semantics;
 using CutSheet.Language.Syntax.Nodes;
@@ -49,27 +50,49 @@ internal sealed partial class ExpressionEvaluator
         return Combine(b, b.Operator, b.Left, left, b.Right, right, f);
     }
 
+    /// <summary>
+    /// A chain of <c>+</c> and <c>-</c>, evaluated left to right. Each step reports its problems as
+    /// if the operands so far were one sum: its span runs from the first operand to this one and
+    /// its operator span is this operand. The chain's own nodes stand for the operands so far.
+    /// </summary>
     private Value Sum(BinarySyntax root, EvalFrame f)
     {
-        var chain = new List<(BinaryOperator Op, ExpressionSyntax Operand)>();
-        ExpressionSyntax node = root;
-        while (node is BinarySyntax { Operator: BinaryOperator.Add or BinaryOperator.Subtract } bin)
+        int count = 0;
+        for (ExpressionSyntax n = root; n is BinarySyntax { Operator: BinaryOperator.Add or BinaryOperator.Subtract } bin; n = bin.Left) count++;
+        var steps = ArrayPool<BinarySyntax>.Shared.Rent(count);
+        try
         {
-            chain.Add((bin.Operator, bin.Right));
-            node = bin.Left;
+            ExpressionSyntax node = root;
+            for (int i = count - 1; i >= 0; i--)
+            {
+                var bin = (BinarySyntax)node;
+                steps[i] = bin;
+                node = bin.Left;
+            }
+            var acc = Evaluate(node, f);
+            var span = node.Span;
+            for (int i = 0; i < count; i++)
+            {
+                var step = steps[i];
+                var operand = step.Right;
+                var right = Evaluate(operand, f);
+                span = span.Cover(operand.Span);
+                acc = acc.IsUnknown || right.IsUnknown ? Value.Unknown : AddSubtract(span, operand.Span, step.Operator, step.Left, acc, operand, right, f);
+            }
+            return acc;
         }
-        chain.Reverse();
-        ExpressionSyntax accSyntax = node;
-        var acc = Evaluate(node, f);
-        foreach (var (op, operand) in chain)
+        finally
         {
-            var right = Evaluate(operand, f);
-            var site = new BinarySyntax(accSyntax.Span.Cover(operand.Span), op, accSyntax, operand, operand.Span);
-            acc = Combine(site, op, accSyntax, acc, operand, right, f);
-            accSyntax = site;
+            ArrayPool<BinarySyntax>.Shared.Return(steps, clearArray: true);
         }
-        return acc;
     }
+
+    /// <summary>
+    /// A comparison whose operands the caller has already evaluated: what <see cref="Evaluate"/>
+    /// of the whole comparison would give, without evaluating the operands a second time.
+    /// </summary>
+    internal Value CompareEvaluated(BinarySyntax comparison, Value left, Value right, EvalFrame f) =>
+        Combine(comparison, comparison.Operator, comparison.Left, left, comparison.Right, right, f);
 
     private Value Combine(BinarySyntax b, BinaryOperator op, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
     {
@@ -77,7 +100,7 @@ internal sealed partial class ExpressionEvaluator
         switch (op)
         {
             case BinaryOperator.Add or BinaryOperator.Subtract:
-                return AddSubtract(b, op, ls, left, rs, right, f);
+                return AddSubtract(b.Span, b.OperatorSpan, op, ls, left, rs, right, f);
             case BinaryOperator.Power:
                 return Power(b, ls, left, rs, right, f);
             default:
@@ -85,7 +108,7 @@ internal sealed partial class ExpressionEvaluator
         }
     }
 
-    private Value AddSubtract(BinarySyntax b, BinaryOperator op, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
+    private Value AddSubtract(TextSpan span, TextSpan operatorSpan, BinaryOperator op, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)
     {
         WarnOffsetScale(ls, f);
         WarnOffsetScale(rs, f);
@@ -96,20 +119,20 @@ internal sealed partial class ExpressionEvaluator
         string verb = op == BinaryOperator.Add ? "add" : "subtract";
         if (!ld.SiEquals(rd))
         {
-            return DimensionError(f, b.OperatorSpan, DiagnosticMessages.DimensionMismatch(verb, Label(ls, Sample(left), f), ld, Label(rs, Sample(right), f), rd), ls, ld, rs, rd);
+            return DimensionError(f, operatorSpan, DiagnosticMessages.DimensionMismatch(verb, Label(ls, Sample(left), f), ld, Label(rs, Sample(right), f), rd), ls, ld, rs, rd);
         }
-        if (!CheckSoft(f, b.OperatorSpan, ls, left, ld, rs, right, rd)) return Value.Unknown;
+        if (!CheckSoft(f, operatorSpan, ls, left, ld, rs, right, rd)) return Value.Unknown;
         if (lt is not null && rt is not null && lt != rt)
         {
-            return Error(f, DiagnosticCodes.KindMismatch, b.OperatorSpan, DiagnosticMessages.KindMismatch(verb, lt.Name, rt.Name));
+            return Error(f, DiagnosticCodes.KindMismatch, operatorSpan, DiagnosticMessages.KindMismatch(verb, lt.Name, rt.Name));
         }
         var tag = lt ?? rt;
         if (left.Kind == ValueKind.Quantity && right.Kind == ValueKind.Quantity)
         {
             double v = op == BinaryOperator.Add ? left.Quantity.Si + right.Quantity.Si : left.Quantity.Si - right.Quantity.Si;
-            return Finite(f, b.Span, v) ? Value.Of(new Quantity(v, ld, tag)) : Value.Unknown;
+            return Finite(f, span, v) ? Value.Of(new Quantity(v, ld, tag)) : Value.Unknown;
         }
-        return Elementwise(f, b.Span, left, right, op == BinaryOperator.Add ? static (x, y) => x + y : static (x, y) => x - y, ld, tag);
+        return Elementwise(f, span, left, right, op == BinaryOperator.Add ? static (x, y) => x + y : static (x, y) => x - y, ld, tag);
     }
 
     /// <summary>Soft factors must agree: revolutions against radians is an error (2π apart); other counts only warn.</summary>
@@ -130,8 +153,8 @@ internal sealed partial class ExpressionEvaluator
     {
         bool offset = operand switch
         {
-            QuantityLiteralSyntax { Unit: { } u } => UnitCatalog.Default.Resolve(u.Text).Unit?.HasOffset == true,
-            NameSyntax { Qualifier: null } n => f.Scope.Find(n.Name) is DefinitionSymbol { DisplayUnit.HasOffset: true },
+            QuantityLiteralSyntax { Unit: { } u } => UnitFacts.Of(u).Resolution.Unit?.HasOffset == true,
+            NameSyntax { Qualifier: null } n => f.Scope.Find(n.Name) is DefinitionSymbol { DisplayUnitHasOffset: true },
             _ => false,
         };
         if (offset) Warn(f, DiagnosticCodes.OffsetArithmetic, operand.Span, DiagnosticMessages.OffsetArithmetic);
@@ -181,25 +204,35 @@ internal sealed partial class ExpressionEvaluator
     /// <summary>A chain of <c>and</c> (or of <c>or</c>), evaluated flat so a long chain does not recurse.</summary>
     private Value Logical(BinarySyntax b, EvalFrame f)
     {
-        var operands = new List<ExpressionSyntax>();
-        ExpressionSyntax node = b;
-        while (node is BinarySyntax bin && bin.Operator == b.Operator)
+        int count = 1;
+        for (ExpressionSyntax n = b; n is BinarySyntax bin && bin.Operator == b.Operator; n = bin.Left) count++;
+        var operands = ArrayPool<ExpressionSyntax>.Shared.Rent(count);
+        try
         {
-            operands.Add(bin.Right);
-            node = bin.Left;
+            ExpressionSyntax node = b;
+            for (int i = count - 1; i > 0; i--)
+            {
+                var bin = (BinarySyntax)node;
+                operands[i] = bin.Right;
+                node = bin.Left;
+            }
+            operands[0] = node;
+            bool unknown = false;
+            bool result = b.Operator == BinaryOperator.And;
+            for (int i = 0; i < count; i++)
+            {
+                var operand = operands[i];
+                var v = Evaluate(operand, f);
+                if (v.IsUnknown) { unknown = true; continue; }
+                if (v.Kind != ValueKind.Boolean) return TypeError(f, operand.Span, "true or false", v);
+                result = b.Operator == BinaryOperator.And ? result && v.Boolean : result || v.Boolean;
+            }
+            return unknown ? Value.Unknown : Value.Of(result);
         }
-        operands.Add(node);
-        operands.Reverse();
-        bool unknown = false;
-        bool result = b.Operator == BinaryOperator.And;
-        foreach (var operand in operands)
+        finally
         {
-            var v = Evaluate(operand, f);
-            if (v.IsUnknown) { unknown = true; continue; }
-            if (v.Kind != ValueKind.Boolean) return TypeError(f, operand.Span, "true or false", v);
-            result = b.Operator == BinaryOperator.And ? result && v.Boolean : result || v.Boolean;
+            ArrayPool<ExpressionSyntax>.Shared.Return(operands, clearArray: true);
         }
-        return unknown ? Value.Unknown : Value.Of(result);
     }
 
     private Value Power(BinarySyntax b, ExpressionSyntax ls, Value left, ExpressionSyntax rs, Value right, EvalFrame f)

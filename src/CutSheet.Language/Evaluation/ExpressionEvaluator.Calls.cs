@@ -39,8 +39,9 @@ internal sealed partial class ExpressionEvaluator
 
     private Value CallBuiltin(CallSyntax call, EvalFrame f)
     {
-        foreach (var a in call.Arguments)
+        for (int i = 0; i < call.Arguments.Count; i++)
         {
+            var a = call.Arguments[i];
             if (a.Name is not null) return Error(f, DiagnosticCodes.ArgumentList, a.NameSpan, DiagnosticMessages.UnknownArgument(call.Callee.Name, a.Name));
         }
         var args = EvaluateArguments(call, f);
@@ -78,7 +79,7 @@ internal sealed partial class ExpressionEvaluator
             else
             {
                 named = true;
-                index = fn.Parameters.FindIndex(p => p.Name == a.Name);
+                index = ParameterIndex(fn, a.Name);
                 if (index < 0) { Error(f, DiagnosticCodes.ArgumentList, a.NameSpan, DiagnosticMessages.UnknownArgument(name, a.Name)); ok = false; continue; }
                 if (bound[index] is not null) { Error(f, DiagnosticCodes.ArgumentList, a.NameSpan, DiagnosticMessages.DuplicateArgument(name, a.Name)); ok = false; continue; }
             }
@@ -128,16 +129,27 @@ internal sealed partial class ExpressionEvaluator
         return InvokeBody(fn, name, call, bodyFrame, f);
     }
 
+    /// <summary>The position of the parameter with this name, or −1 (a loop: a lambda would capture the argument per call).</summary>
+    private static int ParameterIndex(FunctionSymbol fn, string name)
+    {
+        for (int i = 0; i < fn.Parameters.Count; i++) if (fn.Parameters[i].Name == name) return i;
+        return -1;
+    }
+
     /// <summary>Runs a function's clauses and formula in its own frame; cautions fire at the call site.</summary>
     internal Value InvokeBody(FunctionSymbol fn, string name, CallSyntax? call, EvalFrame body, EvalFrame caller)
     {
         var syntax = fn.Syntax;
-        foreach (var local in syntax.Clauses.Locals)
+        // Index loops: foreach over an IReadOnlyList boxes its enumerator, on every call of the function.
+        var clauses = syntax.Clauses;
+        for (int i = 0; i < clauses.Locals.Count; i++)
         {
+            var local = clauses.Locals[i];
             body.Locals![local.Name] = Evaluate(local.Value, body);
         }
-        foreach (var req in syntax.Clauses.Require)
+        for (int i = 0; i < clauses.Require.Count; i++)
         {
+            var req = clauses.Require[i];
             var cond = Evaluate(req.Condition, body);
             if (cond.Kind == ValueKind.Boolean && !cond.Boolean && !body.CheckOnly)
             {
@@ -152,16 +164,18 @@ internal sealed partial class ExpressionEvaluator
         if (!body.CheckOnly)
         {
             var site = body.Foreign ? body.CallSite : call?.Span ?? syntax.Span;
-            foreach (var valid in syntax.Clauses.Valid)
+            for (int i = 0; i < clauses.Valid.Count; i++)
             {
+                var valid = clauses.Valid[i];
                 var cond = Evaluate(valid.Condition, body);
                 if (cond.Kind == ValueKind.Boolean && !cond.Boolean)
                 {
                     Fire(CautionLevel.Caution, DiagnosticMessages.OutsideValidity(name, ConditionText(fn, valid.Condition), valid.Message?.Value), site, fn.Name, DiagnosticCodes.OutsideValidity);
                 }
             }
-            foreach (var caution in syntax.Clauses.Cautions)
+            for (int i = 0; i < clauses.Cautions.Count; i++)
             {
+                var caution = clauses.Cautions[i];
                 var cond = Evaluate(caution.Condition, body);
                 if (cond.Kind == ValueKind.Boolean && cond.Boolean) Fire(caution.Level, caution.Message.Value, site, fn.Name, null);
             }

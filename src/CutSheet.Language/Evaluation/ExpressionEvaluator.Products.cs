@@ -1,3 +1,4 @@
+using System.Buffers;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Syntax.Nodes;
 using CutSheet.Language.Text;
@@ -23,24 +24,43 @@ internal sealed partial class ExpressionEvaluator
             if (l.IsUnknown || r.IsUnknown) return Value.Unknown;
             if (!HasRotation(l) && !HasRotation(r)) return MultiplyPair(root, l, r, f);
         }
-        var operands = new List<(bool Divide, ExpressionSyntax Syntax)>();
-        ExpressionSyntax node = root;
-        while (node is BinarySyntax { Operator: BinaryOperator.Multiply or BinaryOperator.Divide } bin)
+        int count = 1;
+        for (ExpressionSyntax n = root; n is BinarySyntax { Operator: BinaryOperator.Multiply or BinaryOperator.Divide } bin; n = bin.Left) count++;
+        // Rented, not allocated: a sheet evaluates thousands of products, and these arrays die with the call.
+        var operandArray = ArrayPool<(bool Divide, ExpressionSyntax Syntax)>.Shared.Rent(count);
+        var valueArray = ArrayPool<Value>.Shared.Rent(count);
+        try
         {
-            operands.Add((bin.Operator == BinaryOperator.Divide, bin.Right));
-            node = bin.Left;
+            var operands = operandArray.AsSpan(0, count);
+            var values = valueArray.AsSpan(0, count);
+            ExpressionSyntax node = root;
+            for (int i = count - 1; i > 0; i--)
+            {
+                var bin = (BinarySyntax)node;
+                operands[i] = (bin.Operator == BinaryOperator.Divide, bin.Right);
+                node = bin.Left;
+            }
+            operands[0] = (false, node);
+            return Product(root, operands, values, f);
         }
-        operands.Add((false, node));
-        operands.Reverse();
+        finally
+        {
+            ArrayPool<(bool Divide, ExpressionSyntax Syntax)>.Shared.Return(operandArray, clearArray: true);
+            ArrayPool<Value>.Shared.Return(valueArray, clearArray: true);
+        }
+    }
 
-        var values = new Value[operands.Count];
+    /// <summary>The general product: <paramref name="operands"/> in text order, the first never a divisor.</summary>
+    private Value Product(BinarySyntax root, ReadOnlySpan<(bool Divide, ExpressionSyntax Syntax)> operands, Span<Value> values, EvalFrame f)
+    {
         bool unknown = false;
-        bool chainHasPi = operands.Exists(o => IsPi(o.Syntax));
+        bool chainHasPi = false;
+        foreach (var o in operands) chainHasPi |= IsPi(o.Syntax);
         // A π in this product covers the products nested in it: 2 * pi * (n * T) carries its 2π.
         if (chainHasPi) _piProducts++;
         try
         {
-            for (int i = 0; i < operands.Count; i++)
+            for (int i = 0; i < operands.Length; i++)
             {
                 values[i] = Evaluate(operands[i].Syntax, f);
                 if (values[i].IsUnknown) unknown = true;
@@ -68,7 +88,7 @@ internal sealed partial class ExpressionEvaluator
     /// is already right), and 2·pi·n is an angular velocity, 2·pi·n·T a power, π·D·n an arc
     /// length per time; dividing a per-revolution quantity by π leaves a plain one. Without this, 2·pi·n would still count revolutions and show 2π too large.
     /// </summary>
-    private static Value PiTurnsRevolutionsIntoRadians(List<(bool Divide, ExpressionSyntax Syntax)> operands, Value acc)
+    private static Value PiTurnsRevolutionsIntoRadians(ReadOnlySpan<(bool Divide, ExpressionSyntax Syntax)> operands, Value acc)
     {
         int up = 0, down = 0;
         foreach (var (divide, syntax) in operands)
@@ -158,7 +178,7 @@ internal sealed partial class ExpressionEvaluator
         return d[Dimension.Rev] != 0 || d[Dimension.Angle] != 0;
     }
 
-    private void RotationTraps(BinarySyntax root, List<(bool Divide, ExpressionSyntax Syntax)> operands, Value[] values, Value result, EvalFrame f)
+    private void RotationTraps(BinarySyntax root, ReadOnlySpan<(bool Divide, ExpressionSyntax Syntax)> operands, ReadOnlySpan<Value> values, Value result, EvalFrame f)
     {
         bool anyRotation = false;
         foreach (var v in values)
@@ -171,7 +191,7 @@ internal sealed partial class ExpressionEvaluator
         bool torque = false, rotational = false, length = false, namedNumber = false;
         int perRev = -1, angle = -1;
         var torqueDim = Dimension.FromSi(2, 1, -2);
-        for (int i = 0; i < operands.Count; i++)
+        for (int i = 0; i < operands.Length; i++)
         {
             var (d, tag) = DimensionOf(values[i]);
             if (operands[i].Divide) continue;
@@ -195,7 +215,8 @@ internal sealed partial class ExpressionEvaluator
             {
                 // v = π·D·n for a diameter, 2π·r·n for a radius: offer both, the likelier first.
                 var pi = new Fix("multiply by pi (the length is a diameter)", [new TextEdit(at, "pi * ")]);
-                bool halved = operands.Exists(o => o.Divide && o.Syntax is QuantityLiteralSyntax { Number: 2, Unit: null });
+                bool halved = false;
+                foreach (var o in operands) halved |= o.Divide && o.Syntax is QuantityLiteralSyntax { Number: 2, Unit: null };
                 Warn(f, DiagnosticCodes.RpmTimesLength, root.Span, DiagnosticMessages.RpmTimesLength, halved ? [twoPi, pi] : [pi, twoPi]);
             }
         }
@@ -215,7 +236,7 @@ internal sealed partial class ExpressionEvaluator
     private Value Convert(ConvertSyntax c, EvalFrame f)
     {
         var v = Evaluate(c.Operand, f);
-        var resolution = UnitCatalog.Default.Resolve(c.Unit.Text);
+        var resolution = UnitFacts.Of(c.Unit).Resolution;
         if (resolution.Unit is null) return UnitError(c.Unit, resolution.Error!, f);
         if (v.IsUnknown) return v;
         if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, c.Operand.Span, "a quantity", v);

@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Display;
 using CutSheet.Language.Semantics;
@@ -85,16 +86,17 @@ internal sealed partial class ExpressionEvaluator
     private Value Literal(QuantityLiteralSyntax q, EvalFrame f)
     {
         if (q.Unit is null) return Value.Of(new Quantity(q.Number, Dimension.None));
-        var resolution = UnitCatalog.Default.Resolve(q.Unit.Text);
+        var facts = UnitFacts.Of(q.Unit);
+        var resolution = facts.Resolution;
         if (resolution.Unit is null) return UnitError(q.Unit, resolution.Error!, f);
         var unit = resolution.Unit;
         if (unit.Notes.Count > 0 && !f.CheckOnly && !f.Foreign)
         {
             foreach (var note in unit.Notes) Warn(f, DiagnosticCodes.ShopSpelling, q.Unit.Span, note, severity: Severity.Information);
         }
-        if (!f.Foreign && !f.CheckOnly)
+        if (!f.Foreign && !f.CheckOnly && UnitNamesADefinition(facts))
         {
-            foreach (var symbol in SymbolsOf(q.Unit.Text))
+            foreach (var symbol in facts.Symbols)
             {
                 if (!_top.Definitions.ContainsKey(symbol) && !(_top.Imported.TryGetValue(symbol, out var i) && i.Symbol is DefinitionSymbol)) continue;
                 var fix = IsWord(q.Unit.Text)
@@ -106,23 +108,36 @@ internal sealed partial class ExpressionEvaluator
         return Value.Of(new Quantity(unit.ToSi(q.Number), unit.Dimension, unit.Tag));
     }
 
+    /// <summary>
+    /// Per unit, once the sheet's names are settled: whether one of its symbols is also a definition
+    /// here (which the literal warns about). A sheet writes the same few units thousands of times.
+    /// </summary>
+    private Dictionary<UnitFacts, bool>? _unitNamesADefinition;
+
+    /// <summary>Called once the sheet's own and imported names are all declared; from then on they do not change.</summary>
+    internal void NamesDeclared() => _unitNamesADefinition = [];
+
+    private bool UnitNamesADefinition(UnitFacts facts)
+    {
+        if (_unitNamesADefinition is null) return AnySymbolIsADefinition(facts);
+        ref bool answer = ref CollectionsMarshal.GetValueRefOrAddDefault(_unitNamesADefinition, facts, out bool known);
+        if (!known) answer = AnySymbolIsADefinition(facts);
+        return answer;
+    }
+
+    private bool AnySymbolIsADefinition(UnitFacts facts)
+    {
+        foreach (var symbol in facts.Symbols)
+        {
+            if (_top.Definitions.ContainsKey(symbol) || _top.Imported.TryGetValue(symbol, out var i) && i.Symbol is DefinitionSymbol) return true;
+        }
+        return false;
+    }
+
     private static bool IsWord(string text)
     {
         foreach (char c in text) if (!(char.IsLetterOrDigit(c) || c == '_')) return false;
         return true;
-    }
-
-    /// <summary>The symbols of unit text: <c>N*t</c> gives N and t.</summary>
-    private static IEnumerable<string> SymbolsOf(string unitText)
-    {
-        int i = 0;
-        while (i < unitText.Length)
-        {
-            if (!char.IsLetter(unitText[i]) && unitText[i] != '_') { i++; continue; }
-            int start = i;
-            while (i < unitText.Length && (char.IsLetterOrDigit(unitText[i]) || unitText[i] == '_')) i++;
-            yield return unitText[start..i];
-        }
     }
 
     private Value UnitError(UnitSyntax unit, UnitError error, EvalFrame f)

@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Semantics;
 using CutSheet.Language.Syntax.Nodes;
@@ -8,40 +9,55 @@ namespace CutSheet.Language.Evaluation;
 
 internal sealed partial class SheetEvaluator
 {
-    /// <summary>The line where each of the sheet's own names was first declared.</summary>
+    /// <summary>
+    /// The line where each of the sheet's own names other than definitions was first declared; a
+    /// definition's first line is its symbol's (see <see cref="TryFirstLine"/>), so the thousands
+    /// of definitions of a large sheet are hashed into one dictionary, not two.
+    /// </summary>
     private readonly Dictionary<string, int> _declaredAt = new(StringComparer.Ordinal);
 
-    /// <summary>Declares the sheet's own names; a name is declared once, and never over an import or a constant.</summary>
+    /// <summary>The symbol each definition statement declared, by statement index (null where the name was refused).</summary>
+    private DefinitionSymbol?[] _definitionAt = [];
+
+    /// <summary>
+    /// Declares the sheet's own names; a name is declared once, and never over an import or a
+    /// constant. Finds each statement's line on the way (<see cref="MapLine"/>).
+    /// </summary>
     private void Declare()
     {
-        for (int i = 0; i < _syntax.Statements.Count; i++)
+        var statements = _statements;
+        // Sized once from the statement count: a large sheet would otherwise rehash it a dozen times.
+        _scope.Definitions.EnsureCapacity(_scope.Definitions.Count + statements.Count);
+        _definitionAt = new DefinitionSymbol?[statements.Count];
+        _statementLines = new int[statements.Count];
+        int line = 0;
+        for (int i = 0; i < statements.Count; i++)
         {
-            var statement = _syntax.Statements[i];
-            int line = LineOf(statement.Span);
+            var statement = statements[i];
+            line = MapLine(i, line);
             switch (statement)
             {
                 case DefinitionSyntax d:
-                    if (CanDeclare(d.Name, d.NameSpan))
-                        _scope.Definitions[d.Name] = new DefinitionSymbol(d, i, line, _source.Path);
+                    _definitionAt[i] = DeclareDefinition(d, i, line);
                     break;
                 case FunctionSyntax fn:
-                    if (CanDeclare(fn.Name, fn.NameSpan))
+                    if (CanDeclare(fn.Name, fn.NameSpan, LineWithin(i, fn.NameSpan)))
                         _scope.Functions[fn.Name] = new FunctionSymbol(fn, _scope, line);
                     break;
                 case ChoiceSyntax c:
-                    if (!CanDeclare(c.Name, c.NameSpan)) break;
+                    if (!CanDeclare(c.Name, c.NameSpan, LineWithin(i, c.NameSpan))) break;
                     var type = new ChoiceType(c.Name, _source.Path);
                     _scope.Choices[c.Name] = type;
                     foreach (var (option, span) in c.Options)
                     {
-                        if (!CanDeclare(option, span)) continue;
+                        if (!CanDeclare(option, span, LineWithin(i, span))) continue;
                         var o = new ChoiceOption(type, option, type.Options.Count);
                         type.Options.Add(o);
                         _scope.Options[option] = o;
                     }
                     break;
                 case TableSyntax t:
-                    if (CanDeclare(t.Name, t.NameSpan))
+                    if (CanDeclare(t.Name, t.NameSpan, LineWithin(i, t.NameSpan)))
                         _scope.Tables[t.Name] = new TableSymbol(t, null, _source.Path);
                     break;
                 case KindDeclarationSyntax k:
@@ -52,14 +68,64 @@ internal sealed partial class SheetEvaluator
                         _sink.Report(Diagnostic.Error(DiagnosticCodes.UnknownKind, k.BaseSpan, DiagnosticMessages.UnknownKind(k.Base, ExpressionEvaluator.Suggest(k.Base, candidates))));
                         break;
                     }
-                    if (CanDeclare(k.Name, k.NameSpan))
+                    if (CanDeclare(k.Name, k.NameSpan, LineWithin(i, k.NameSpan)))
                         _scope.Kinds[k.Name] = new Kind(k.Name, basis.Dimension, k.Clauses.Description?.Value ?? $"{k.Name.Replace('_', ' ')} (a {basis.Name.Replace('_', ' ')})", isTagged: true, basis: basis);
                     break;
             }
         }
     }
 
-    private bool CanDeclare(string name, TextSpan span)
+    /// <summary>Declares a definition's name, or reports why not and returns null.</summary>
+    private DefinitionSymbol? DeclareDefinition(DefinitionSyntax d, int index, int line)
+    {
+        // One hash of the name finds an earlier definition and reserves the slot for this one; every
+        // refusal below, all errors, gives the slot back. Nothing else touches Definitions meanwhile.
+        ref var slot = ref CollectionsMarshal.GetValueRefOrAddDefault(_scope.Definitions, d.Name, out bool defined);
+        if (defined)
+        {
+            int first = _declaredAt.TryGetValue(d.Name, out int otherLine) ? otherLine : slot!.Line;
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, d.NameSpan, DiagnosticMessages.Redefinition(d.Name, first + 1)));
+            return null;
+        }
+        if (!CanDeclareOverOthers(d.Name, d.NameSpan))
+        {
+            _scope.Definitions.Remove(d.Name);
+            return null;
+        }
+        var symbol = new DefinitionSymbol(d, index, line, _source.Path);
+        slot = symbol;
+        // A name written on a later line than its statement starts keeps its own line, as other names do.
+        int nameLine = LineWithin(index, d.NameSpan);
+        if (nameLine != line) _declaredAt[d.Name] = nameLine;
+        return symbol;
+    }
+
+    /// <summary>The line where a name of the sheet was first declared, if it was.</summary>
+    private bool TryFirstLine(string name, out int line)
+    {
+        if (_declaredAt.TryGetValue(name, out line)) return true;
+        if (_scope.Definitions.TryGetValue(name, out var definition))
+        {
+            line = definition.Line;
+            return true;
+        }
+        return false;
+    }
+
+    private bool CanDeclare(string name, TextSpan span, int line)
+    {
+        if (TryFirstLine(name, out int firstLine))
+        {
+            _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.Redefinition(name, firstLine + 1)));
+            return false;
+        }
+        if (!CanDeclareOverOthers(name, span)) return false;
+        _declaredAt[name] = line;
+        return true;
+    }
+
+    /// <summary>The checks after the sheet's own definitions: its other names, then imports, then built-ins.</summary>
+    private bool CanDeclareOverOthers(string name, TextSpan span)
     {
         if (_declaredAt.TryGetValue(name, out int firstLine))
         {
@@ -71,12 +137,11 @@ internal sealed partial class SheetEvaluator
             _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportedRedefinition, span, DiagnosticMessages.ImportedRedefinition(name, imported.From.DisplayName)));
             return false;
         }
-        if (Builtins.Constants.ContainsKey(name) || Builtins.IsFunction(name))
+        if (Builtins.IsBuiltinName(name))
         {
             _sink.Report(Diagnostic.Error(DiagnosticCodes.Redefinition, span, DiagnosticMessages.RedefinitionOfBuiltin(name)));
             return false;
         }
-        _declaredAt[name] = LineOf(span);
         return true;
     }
 

@@ -12,8 +12,10 @@ internal sealed partial class SheetEvaluator
     /// <summary>Loads every <c>use</c>: library sheets by name, workspace sheets by path (confined, no cycles).</summary>
     private void DeclareImports()
     {
-        foreach (var use in _syntax.Statements.OfType<UseSyntax>())
+        foreach (var statement in _statements)
         {
+            // A plain type test: OfType<UseSyntax> tested every statement through the shared generic cast helper.
+            if (statement is not UseSyntax use) continue;
             var overrides = new Dictionary<string, Value>(StringComparer.Ordinal);
             var frame = new EvalFrame { Scope = _scope, CallSite = use.Span };
             foreach (var o in use.Overrides) overrides[o.Name] = _eval.Evaluate(o.Value, frame);

@@ -11,18 +11,18 @@ internal sealed partial class SheetEvaluator
 {
     private List<StatementResult> EvaluateStatements()
     {
-        var results = new List<StatementResult>(_syntax.Statements.Count);
+        var results = new List<StatementResult>(_statements.Count);
         var overrides = ParseOverrides();
-        for (int i = 0; i < _syntax.Statements.Count; i++)
+        for (int i = 0; i < _statements.Count; i++)
         {
-            var statement = _syntax.Statements[i];
-            int line = LineOf(statement.Span);
+            var statement = _statements[i];
+            int line = _statementLines[i];
             _currentLine = line;
             _sink.BeginStatement();
             CheckClauses(statement);
             StatementResult result = statement switch
             {
-                DefinitionSyntax d => EvaluateDefinition(d, line, overrides),
+                DefinitionSyntax d => EvaluateDefinition(d, line, _definitionAt[i], overrides),
                 CheckSyntax c => EvaluateCheck(c, line),
                 CautionSyntax c => EvaluateCaution(c, line),
                 TableSyntax t => EvaluateTable(t, line),
@@ -62,7 +62,9 @@ internal sealed partial class SheetEvaluator
 
     private void CheckClauses(StatementSyntax statement)
     {
-        if (statement.Clauses.Keywords.Count == 0) return;
+        var clauses = statement.Clauses;
+        // Most statements share the empty clauses: no need to look further.
+        if (ReferenceEquals(clauses, ClausesSyntax.Empty) || clauses.Keywords.Count == 0) return;
         string[] allowed = statement switch
         {
             DefinitionSyntax => ["assumed", "source", "accepted"],
@@ -74,7 +76,7 @@ internal sealed partial class SheetEvaluator
             KindDeclarationSyntax => ["source"],
             _ => [],
         };
-        foreach (var (keyword, span) in statement.Clauses.Keywords)
+        foreach (var (keyword, span) in clauses.Keywords)
         {
             if (Array.IndexOf(allowed, keyword) < 0)
             {
@@ -118,7 +120,7 @@ internal sealed partial class SheetEvaluator
     private StatementResult EvaluateTable(TableSyntax t, int line)
     {
         if (!_scope.Tables.TryGetValue(t.Name, out var table) || table.Syntax != t) return new OtherStatementResult(t, line);
-        var frame = new EvalFrame { Scope = _scope, CallSite = t.Span };
+        var frame = StatementFrame(t.Span);
         var rowLines = new Dictionary<string, int>(StringComparer.Ordinal);
         foreach (var row in t.Clauses.Rows)
         {
@@ -149,7 +151,7 @@ internal sealed partial class SheetEvaluator
 
     private StatementResult EvaluateCaution(CautionSyntax c, int line)
     {
-        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span };
+        var frame = StatementFrame(c.Span);
         var v = _eval.Evaluate(c.Condition, frame);
         bool? fired = null;
         if (v.Kind == ValueKind.Boolean)

@@ -12,12 +12,23 @@ internal sealed partial class SheetEvaluator
     private ValuePresenter? _presenter;
     private ValuePresenter Presenter => _presenter ??= new ValuePresenter(_display, _scope);
 
-    private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
+    private EvalFrame? _statementFrame;
+
+    /// <summary>The top-level frame for the statement about to be evaluated (one object reused for all of them).</summary>
+    private EvalFrame StatementFrame(TextSpan callSite, bool recordDependencies = false)
     {
-        var frame = new EvalFrame { Scope = _scope, CallSite = d.Span, RecordDependencies = true };
+        var frame = _statementFrame ??= new EvalFrame { Scope = _scope };
+        frame.StartStatement(callSite, recordDependencies);
+        return frame;
+    }
+
+    private StatementResult EvaluateDefinition(DefinitionSyntax d, int line, DefinitionSymbol? symbol, Dictionary<string, (SheetSyntax Syntax, DefinitionSyntax Definition)> overrides)
+    {
+        var frame = StatementFrame(d.Span, recordDependencies: true);
         var value = _eval.Evaluate(d.Value, frame);
         var clauses = d.Clauses;
-        if (!_scope.Definitions.TryGetValue(d.Name, out var symbol) || symbol.Syntax != d)
+        // The symbol Declare made for this very statement; a refused redefinition has none.
+        if (symbol is null)
         {
             return new DefinitionResult(d, line, d.Name, null, null, false, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value, false);
         }
@@ -50,11 +61,17 @@ internal sealed partial class SheetEvaluator
         switch (value.Kind)
         {
             case ValueKind.Quantity:
-                var unit = overridden ? Presenter.UnitFor(o.Definition?.Value ?? d.Value, value.Quantity) : Presenter.UnitFor(d.Value, value.Quantity);
-                if (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension)) symbol.DisplayUnit = unit;
-                shown = Presenter.Present(value.Quantity, symbol.DisplayUnit ?? (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension) ? unit : null));
-                kind = value.Quantity.Kind?.Name ?? value.Quantity.Dimension.ToString();
-                break;
+                var root = overridden ? o.Definition?.Value ?? d.Value : d.Value;
+                if (Presenter.TryNamedUnit(root, value.Quantity, out var unit))
+                {
+                    if (unit is not null && unit.Dimension.SiEquals(value.Quantity.Dimension)) symbol.DisplayUnit = unit;
+                }
+                else
+                {
+                    symbol.ChooseDisplayUnitLater(DeferredDisplayUnit.For(Presenter.ChoiceSystem));
+                }
+                // The shown value and the kind's name are made when the result is first read.
+                return new DefinitionResult(d, line, symbol, Presenter, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value);
             case ValueKind.List:
                 var listUnit = Presenter.UnitFor(d.Value, new Quantity(value.List!.Values.FirstOrDefault(), value.List.Dimension, value.List.Tag));
                 shown = Presenter.PresentList(value.List, listUnit);
@@ -91,14 +108,16 @@ internal sealed partial class SheetEvaluator
         string? description = c.Clauses.Description?.Value;
         if (c.Condition is not BinarySyntax { Operator: BinaryOperator.LessEqual or BinaryOperator.Less or BinaryOperator.GreaterEqual or BinaryOperator.Greater or BinaryOperator.Equal or BinaryOperator.NotEqual } cmp)
         {
-            _eval.Evaluate(c.Condition, new EvalFrame { Scope = _scope, CallSite = c.Span });
+            _eval.Evaluate(c.Condition, StatementFrame(c.Span));
             _sink.Report(Diagnostic.Error(DiagnosticCodes.NotAComparison, c.Condition.Span, DiagnosticMessages.NotAComparison));
             return new CheckResult(c, line, CheckStatus.NotEvaluated, "?", null, null, null, null, description, "not a comparison");
         }
-        var frame = new EvalFrame { Scope = _scope, CallSite = c.Span };
-        var outcome = _eval.Evaluate(c.Condition, frame);
+        var frame = StatementFrame(c.Span);
+        // Each side once, then the comparison: the same values and diagnostics, in the same order, as
+        // evaluating the condition whole and then each side again for display.
         var left = _eval.Evaluate(cmp.Left, frame);
         var right = _eval.Evaluate(cmp.Right, frame);
+        var outcome = _eval.CompareEvaluated(cmp, left, right, frame);
         var tolerance = c.Tolerance is null ? (Value?)null : _eval.Evaluate(c.Tolerance, frame);
         string op = _source.Slice(cmp.OperatorSpan);
 

@@ -16,6 +16,9 @@ namespace CutSheet.Language.Evaluation;
 internal sealed partial class SheetEvaluator
 {
     private readonly SheetSyntax _syntax;
+
+    /// <summary>The statements as a list (indexed without an interface call in every stage's loop).</summary>
+    private readonly List<StatementSyntax> _statements;
     private readonly SourceText _source;
     private readonly RunOptions _options;
     private readonly ImportContext _imports;
@@ -31,6 +34,7 @@ internal sealed partial class SheetEvaluator
     private SheetEvaluator(SheetSyntax syntax, RunOptions options, ImportContext imports, IReadOnlyDictionary<string, Value> importOverrides, string displayName)
     {
         _syntax = syntax;
+        _statements = syntax.Statements as List<StatementSyntax> ?? [.. syntax.Statements];
         _source = syntax.Source;
         _options = options;
         _imports = imports;
@@ -60,6 +64,7 @@ internal sealed partial class SheetEvaluator
         ReadSettings();
         DeclareImports();
         Declare();
+        _eval.NamesDeclared();
         ResolveSignatures();
         RejectRecursion();
         CheckFunctionBodies();
@@ -88,8 +93,9 @@ internal sealed partial class SheetEvaluator
         var units = _options.Units;
         int? digits = _options.Digits;
         var keyLines = new Dictionary<string, int>(StringComparer.Ordinal);
-        foreach (var statement in _syntax.Statements)
+        for (int i = 0; i < _statements.Count; i++)
         {
+            var statement = _statements[i];
             switch (statement)
             {
                 case SheetMetadataSyntax m:

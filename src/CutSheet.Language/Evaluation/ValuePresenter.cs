@@ -13,22 +13,38 @@ namespace CutSheet.Language.Evaluation;
 /// </summary>
 internal sealed class ValuePresenter(DisplaySettings settings, SheetScope scope)
 {
-    public ResolvedUnit? UnitFor(ExpressionSyntax root, Quantity q)
+    public ResolvedUnit? UnitFor(ExpressionSyntax root, Quantity q) =>
+        TryNamedUnit(root, q, out var unit) ? unit : DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, ChoiceSystem);
+
+    /// <summary>The unit system the ladders are read in when the expression names no unit (both shows metric first).</summary>
+    public UnitSystem ChoiceSystem => settings.Units == UnitSystem.Inch ? UnitSystem.Inch : UnitSystem.Metric;
+
+    /// <summary>
+    /// The first three rules: true when the expression itself settles the unit (after <c>as</c>, a
+    /// literal as written, a lone name shown in a unit); false when the unit system must choose.
+    /// </summary>
+    public bool TryNamedUnit(ExpressionSyntax root, Quantity q, out ResolvedUnit? unit)
     {
         switch (root)
         {
             case ConvertSyntax c:
-                return UnitCatalog.Default.Resolve(c.Unit.Text).Unit;
+                unit = UnitFacts.Of(c.Unit).Resolution.Unit;
+                return true;
             case QuantityLiteralSyntax { Unit: { } u }:
-                return UnitCatalog.Default.Resolve(u.Text).Unit;
+                unit = UnitFacts.Of(u).Resolution.Unit;
+                return true;
             case UnarySyntax { Operator: UnaryOperator.Negate, Operand: QuantityLiteralSyntax { Unit: { } nu } }:
-                return UnitCatalog.Default.Resolve(nu.Text).Unit;
+                unit = UnitFacts.Of(nu).Resolution.Unit;
+                return true;
             case QuantityLiteralSyntax:
-                return null;
+                unit = null;
+                return true;
             case NameSyntax n when scope.Find(n.Name) is DefinitionSymbol { DisplayUnit: { } du } && du.Dimension.SiEquals(q.Dimension):
-                return du;
+                unit = du;
+                return true;
         }
-        return DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, settings.Units == UnitSystem.Inch ? UnitSystem.Inch : UnitSystem.Metric);
+        unit = null;
+        return false;
     }
 
     public DisplayedValue Present(Quantity q, ResolvedUnit? unit, int? digits = null)

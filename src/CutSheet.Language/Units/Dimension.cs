@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using System.Runtime.Intrinsics;
 using System.Text;
 
 namespace CutSheet.Language.Units;
@@ -31,14 +32,32 @@ public readonly struct Dimension : IEquatable<Dimension>
 
     private Dimension(Exponents e) => _e = e;
 
-    public sbyte this[int index] => _e[index];
+    public sbyte this[int index] => (uint)index < Count ? _e[index] : throw new IndexOutOfRangeException();
 
     public static Dimension Of(int index, int exponent = 1)
     {
+        if ((uint)index >= Count) throw new IndexOutOfRangeException();
         var e = new Exponents();
         e[index] = (sbyte)exponent;
         return new Dimension(e);
     }
+
+    /// <summary>
+    /// The exponents as one 16-byte vector (the last two bytes are padding and always zero), so that
+    /// products, comparisons and hashes, done for every operation a sheet evaluates, take a few
+    /// instructions instead of a loop over fourteen bytes.
+    /// </summary>
+    private Vector128<sbyte> Vector => Unsafe.ReadUnaligned<Vector128<sbyte>>(ref Unsafe.As<Exponents, byte>(ref Unsafe.AsRef(in _e)));
+
+    private static Dimension FromVector(Vector128<sbyte> v)
+    {
+        var e = new Exponents();
+        Unsafe.WriteUnaligned(ref Unsafe.As<Exponents, byte>(ref e), v);
+        return new Dimension(e);
+    }
+
+    /// <summary>Selects the seven SI exponents of a vector.</summary>
+    private static readonly Vector128<sbyte> SiMask = Vector128.Create(-1, -1, -1, -1, -1, -1, -1, 0, 0, 0, 0, 0, 0, 0, 0, (sbyte)0);
 
     public static Dimension FromSi(int l, int m, int t, int i = 0, int th = 0, int n = 0, int j = 0)
     {
@@ -47,19 +66,10 @@ public readonly struct Dimension : IEquatable<Dimension>
         return new Dimension(e);
     }
 
-    public static Dimension operator *(Dimension a, Dimension b)
-    {
-        var e = new Exponents();
-        for (int k = 0; k < Count; k++) e[k] = (sbyte)(a._e[k] + b._e[k]);
-        return new Dimension(e);
-    }
+    // Byte-wise and wrapping, as the casts of a loop over the exponents would be; CanCombine guards the range.
+    public static Dimension operator *(Dimension a, Dimension b) => FromVector(a.Vector + b.Vector);
 
-    public static Dimension operator /(Dimension a, Dimension b)
-    {
-        var e = new Exponents();
-        for (int k = 0; k < Count; k++) e[k] = (sbyte)(a._e[k] - b._e[k]);
-        return new Dimension(e);
-    }
+    public static Dimension operator /(Dimension a, Dimension b) => FromVector(a.Vector - b.Vector);
 
     public Dimension Pow(int n)
     {
@@ -71,11 +81,16 @@ public readonly struct Dimension : IEquatable<Dimension>
     /// <summary>True when a·b (sign 1) or a/b (sign −1) keeps every exponent within ±<see cref="MaxExponent"/>.</summary>
     public static bool CanCombine(Dimension a, Dimension b, int sign)
     {
-        for (int k = 0; k < Count; k++)
+        // Widened to 16 bits, where no sum or difference of two exponents overflows.
+        var (aLow, aHigh) = Vector128.Widen(a.Vector);
+        var (bLow, bHigh) = Vector128.Widen(b.Vector);
+        if (sign < 0)
         {
-            if (Math.Abs(a._e[k] + sign * b._e[k]) > MaxExponent) return false;
+            bLow = -bLow;
+            bHigh = -bHigh;
         }
-        return true;
+        var limit = Vector128.Create((short)MaxExponent);
+        return !Vector128.GreaterThanAny(Vector128.Abs(aLow + bLow), limit) && !Vector128.GreaterThanAny(Vector128.Abs(aHigh + bHigh), limit);
     }
 
     /// <summary>True when raising to p/q keeps every exponent within ±<see cref="MaxExponent"/>.</summary>
@@ -103,58 +118,27 @@ public readonly struct Dimension : IEquatable<Dimension>
     }
 
     /// <summary>The same dimension with every soft factor removed (its SI part).</summary>
-    public Dimension Si
-    {
-        get
-        {
-            var e = new Exponents();
-            for (int k = 0; k < SiCount; k++) e[k] = _e[k];
-            return new Dimension(e);
-        }
-    }
+    public Dimension Si => FromVector(Vector & SiMask);
 
     public bool IsDimensionless => SiEquals(None);
 
-    public bool IsNone
-    {
-        get
-        {
-            for (int k = 0; k < Count; k++) if (_e[k] != 0) return false;
-            return true;
-        }
-    }
+    public bool IsNone => Vector == Vector128<sbyte>.Zero;
 
-    public bool HasSoft
-    {
-        get
-        {
-            for (int k = SiCount; k < Count; k++) if (_e[k] != 0) return true;
-            return false;
-        }
-    }
+    public bool HasSoft => Vector128.AndNot(Vector, SiMask) != Vector128<sbyte>.Zero;
 
     /// <summary>Rotation content: the angle exponent plus the revolution exponent.</summary>
     public int RotationOrder => _e[Angle] + _e[Rev];
 
-    public bool SiEquals(Dimension other)
-    {
-        for (int k = 0; k < SiCount; k++) if (_e[k] != other._e[k]) return false;
-        return true;
-    }
+    public bool SiEquals(Dimension other) => ((Vector ^ other.Vector) & SiMask) == Vector128<sbyte>.Zero;
 
-    public bool Equals(Dimension other)
-    {
-        for (int k = 0; k < Count; k++) if (_e[k] != other._e[k]) return false;
-        return true;
-    }
+    public bool Equals(Dimension other) => Vector == other.Vector;
 
     public override bool Equals(object? obj) => obj is Dimension d && Equals(d);
 
     public override int GetHashCode()
     {
-        var h = new HashCode();
-        for (int k = 0; k < Count; k++) h.Add(_e[k]);
-        return h.ToHashCode();
+        var halves = Vector.AsInt64();
+        return HashCode.Combine(halves.GetElement(0), halves.GetElement(1));
     }
 
     public static bool operator ==(Dimension a, Dimension b) => a.Equals(b);
@@ -196,7 +180,8 @@ public readonly struct Dimension : IEquatable<Dimension>
 
     public static string SoftName(int index) => SoftNames[index - SiCount];
 
-    [InlineArray(Count)]
+    /// <summary>Fourteen exponents and two bytes of padding, always zero, to fill a 16-byte vector.</summary>
+    [InlineArray(Count + 2)]
     private struct Exponents
     {
         private sbyte _element0;
