@@ -26,6 +26,10 @@ public sealed class SheetAnalysis
     public static SheetAnalysis Evaluate(string text, string? path, int version, RunOptions? options = null) =>
         new(SheetRunner.Run(text, path, options), version);
 
+    /// <summary>Evaluates a text whose line map is already built (an open document's), so it is not built again.</summary>
+    public static SheetAnalysis Evaluate(SourceText source, int version, RunOptions? options = null) =>
+        new(SheetRunner.Run(source, options), version);
+
     public SheetResult Result { get; }
 
     public int Version { get; }

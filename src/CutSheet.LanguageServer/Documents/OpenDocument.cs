@@ -25,11 +25,11 @@ public sealed class OpenDocument(string uri, string? path)
     public SourceText Text { get; private set; } = new("", path);
 
     /// <summary>Replaces the text (synchronously, before any await) and returns the token that a newer version will cancel.</summary>
-    public CancellationToken Update(string text, int version)
+    public CancellationToken Update(SourceText text, int version)
     {
         lock (_gate)
         {
-            Text = new SourceText(text, Path);
+            Text = text;
             Version = version;
             _evaluation.Cancel();
             _evaluation.Dispose();
@@ -41,7 +41,7 @@ public sealed class OpenDocument(string uri, string? path)
     /// <summary>Starts over on the current version (after a change in a sheet it imports).</summary>
     public CancellationToken Restart()
     {
-        lock (_gate) return Update(Text.Text, Version);
+        lock (_gate) return Update(Text, Version);
     }
 
     public void SetEvaluation(Task<SheetAnalysis> evaluation)

@@ -7,8 +7,8 @@ namespace CutSheet.LanguageServer.Documents;
 /// <summary>Applies didChange events in order: a ranged change replaces its range; a change without a range replaces the text.</summary>
 public static class TextChanges
 {
-    /// <summary>The new text; <paramref name="clamped"/> is true when a range reached past the end (applied up to the end).</summary>
-    public static string Apply(SourceText text, IEnumerable<TextDocumentContentChangeEvent> changes, PositionMapper positions, out bool clamped)
+    /// <summary>The new text, its line map built once; <paramref name="clamped"/> is true when a range reached past the end (applied up to the end).</summary>
+    public static SourceText Apply(SourceText text, IEnumerable<TextDocumentContentChangeEvent> changes, PositionMapper positions, out bool clamped)
     {
         clamped = false;
         var current = text;
@@ -24,7 +24,7 @@ public static class TextChanges
             string updated = string.Concat(current.Text.AsSpan(0, span.Start), change.Text ?? "", current.Text.AsSpan(span.End));
             current = new SourceText(updated, text.Path);
         }
-        return current.Text;
+        return current;
     }
 
     private static bool PastEnd(SourceText text, Position p) => p.Line >= text.LineCount || p.Line < 0 || p.Character < 0;

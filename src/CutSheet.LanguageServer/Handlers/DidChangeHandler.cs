@@ -26,7 +26,7 @@ public sealed class DidChangeHandler(ServerContext context) : INotificationHandl
             context.Log.Warning(ServerMessages.StaleChange(document.Uri, p.TextDocument.Version, document.Version));
             return;
         }
-        string text = TextChanges.Apply(document.Text, p.ContentChanges ?? [], context.Positions, out bool clamped);
+        var text = TextChanges.Apply(document.Text, p.ContentChanges ?? [], context.Positions, out bool clamped);
         if (clamped) context.Log.Warning(ServerMessages.EditClamped(document.Uri));
         var superseded = document.Update(text, p.TextDocument.Version);
         context.Scheduler.Start(document, superseded, refreshImporters: true);

@@ -1,3 +1,4 @@
+using CutSheet.Language.Text;
 using CutSheet.LanguageServer.Conversion;
 using CutSheet.LanguageServer.Protocol;
 using CutSheet.LanguageServer.Server;
@@ -13,7 +14,7 @@ public sealed class DidOpenHandler(ServerContext context) : INotificationHandler
     {
         var item = p.TextDocument;
         var document = context.Documents.Open(item.Uri, DocumentUris.ToPath(item.Uri));
-        var superseded = document.Update(item.Text ?? "", item.Version);
+        var superseded = document.Update(new SourceText(item.Text ?? "", document.Path), item.Version);
         context.Scheduler.Start(document, superseded, refreshImporters: true);
     }
 }

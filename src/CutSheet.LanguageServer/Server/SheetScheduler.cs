@@ -29,7 +29,7 @@ public sealed class SheetScheduler(ServerState state, DocumentStore documents, D
         var evaluation = Task.Run(() =>
         {
             superseded.ThrowIfCancellationRequested();
-            var analysis = SheetAnalysis.Evaluate(text.Text, text.Path, version, options);
+            var analysis = SheetAnalysis.Evaluate(text, version, options);
             superseded.ThrowIfCancellationRequested();
             return analysis;
         }, superseded);
