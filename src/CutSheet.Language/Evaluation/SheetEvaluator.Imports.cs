@@ -1,5 +1,6 @@
 using CutSheet.Language.Diagnostics;
 using CutSheet.Language.Library;
+using CutSheet.Language.Results;
 using CutSheet.Language.Semantics;
 using CutSheet.Language.Syntax;
 using CutSheet.Language.Syntax.Nodes;
@@ -68,16 +69,9 @@ internal sealed partial class SheetEvaluator
             string cacheKey = key + "|" + string.Join(";", use.Overrides.Select(o => o.Name + "=" + _source.Slice(o.Value.Span)));
             if (!_imports.Cache.TryGetValue(cacheKey, out var loaded))
             {
-                _imports.Loading.Add(_source.Path ?? "");
-                try
-                {
-                    var importOptions = _options with { Overrides = new Dictionary<string, string>() };
-                    loaded = EvaluateScope(syntax, importOptions, _imports, overrides, label);
-                }
-                finally
-                {
-                    _imports.Loading.RemoveAt(_imports.Loading.Count - 1);
-                }
+                loaded = !use.IsPath && use.Overrides.Count == 0
+                    ? LibraryScopes.Get(use.Target, syntax, _options)
+                    : Load(syntax, overrides, label);
                 _imports.Cache[cacheKey] = loaded;
             }
             var (scope, result) = loaded;
@@ -100,6 +94,21 @@ internal sealed partial class SheetEvaluator
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideNotInput(o.Name, label)));
             }
             Register(use, scope, label);
+        }
+    }
+
+    /// <summary>Evaluates an imported sheet in this run's import context (workspace sheets, and library sheets with overrides).</summary>
+    private (SheetScope Scope, SheetResult Result) Load(SheetSyntax syntax, IReadOnlyDictionary<string, Value> overrides, string label)
+    {
+        _imports.Loading.Add(_source.Path ?? "");
+        try
+        {
+            var importOptions = _options with { Overrides = new Dictionary<string, string>() };
+            return EvaluateScope(syntax, importOptions, _imports, overrides, label);
+        }
+        finally
+        {
+            _imports.Loading.RemoveAt(_imports.Loading.Count - 1);
         }
     }
 
