@@ -16,4 +16,8 @@ public static class SheetRunner
 
     public static SheetResult Run(SourceText source, RunOptions? options = null) =>
         SheetEvaluator.Evaluate(source, options ?? RunOptions.Default, new ImportContext());
+
+    /// <summary>Evaluates a sheet already parsed (e.g. with <see cref="Syntax.SheetSyntax.Parse(SourceText, Syntax.SheetSyntax?)"/>, reusing an earlier parse).</summary>
+    public static SheetResult Run(Syntax.SheetSyntax syntax, RunOptions? options = null) =>
+        SheetEvaluator.Evaluate(syntax, options ?? RunOptions.Default, new ImportContext());
 }

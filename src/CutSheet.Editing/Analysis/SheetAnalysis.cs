@@ -2,6 +2,7 @@ using CutSheet.Editing.Symbols;
 using CutSheet.Language;
 using CutSheet.Language.Evaluation;
 using CutSheet.Language.Results;
+using CutSheet.Language.Syntax;
 using CutSheet.Language.Text;
 
 namespace CutSheet.Editing.Analysis;
@@ -26,9 +27,16 @@ public sealed class SheetAnalysis
     public static SheetAnalysis Evaluate(string text, string? path, int version, RunOptions? options = null) =>
         new(SheetRunner.Run(text, path, options), version);
 
-    /// <summary>Evaluates a text whose line map is already built (an open document's), so it is not built again.</summary>
-    public static SheetAnalysis Evaluate(SourceText source, int version, RunOptions? options = null) =>
-        new(SheetRunner.Run(source, options), version);
+    /// <summary>
+    /// Evaluates a text whose line map is already built (an open document's), so it is not built
+    /// again; the statements that an edit left unchanged since <paramref name="previous"/> (an
+    /// earlier analysis of the same document) are not parsed again either.
+    /// </summary>
+    public static SheetAnalysis Evaluate(SourceText source, int version, RunOptions? options = null, SheetAnalysis? previous = null)
+    {
+        var earlier = previous is not null && previous.Path == source.Path ? previous.Result.Syntax : null;
+        return new(SheetRunner.Run(SheetSyntax.Parse(source, earlier), options), version);
+    }
 
     public SheetResult Result { get; }
 

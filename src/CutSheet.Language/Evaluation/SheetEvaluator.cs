@@ -47,6 +47,9 @@ internal sealed partial class SheetEvaluator
     public static SheetResult Evaluate(SourceText source, RunOptions options, ImportContext imports) =>
         EvaluateScope(source, options, imports, new Dictionary<string, Value>(), source.Path ?? "this sheet").Result;
 
+    public static SheetResult Evaluate(SheetSyntax syntax, RunOptions options, ImportContext imports) =>
+        EvaluateScope(syntax, options, imports, new Dictionary<string, Value>(), syntax.Source.Path ?? "this sheet").Result;
+
     internal static (SheetScope Scope, SheetResult Result) EvaluateScope(SourceText source, RunOptions options, ImportContext imports,
         IReadOnlyDictionary<string, Value> importOverrides, string displayName) =>
         EvaluateScope(SheetSyntax.Parse(source), options, imports, importOverrides, displayName);

@@ -13,12 +13,18 @@ public sealed class SheetSyntax
     /// <summary>Every token, made when first asked for.</summary>
     private SyntaxToken[]? _tokens;
 
-    internal SheetSyntax(SourceText source, IReadOnlyList<StatementSyntax> statements, IReadOnlyList<Diagnostic> diagnostics)
+    internal SheetSyntax(SourceText source, IReadOnlyList<StatementSyntax> statements, List<Diagnostic> diagnostics, Parsing.StatementRecord[] records)
     {
         Source = source;
         Statements = statements;
-        Diagnostics = diagnostics;
+        DiagnosticList = diagnostics;
+        Records = records;
     }
+
+    /// <summary>What each statement's parse gave, for the next parse of an edited version (see <see cref="Parse(SourceText, SheetSyntax?)"/>).</summary>
+    internal Parsing.StatementRecord[] Records { get; }
+
+    internal List<Diagnostic> DiagnosticList { get; }
 
     public SourceText Source { get; }
 
@@ -33,7 +39,7 @@ public sealed class SheetSyntax
 
     public IReadOnlyList<StatementSyntax> Statements { get; }
 
-    public IReadOnlyList<Diagnostic> Diagnostics { get; }
+    public IReadOnlyList<Diagnostic> Diagnostics => DiagnosticList;
 
     /// <summary>The text again, from the tokens: equal to the source for every input.</summary>
     public string Print()
@@ -44,7 +50,15 @@ public sealed class SheetSyntax
     }
 
     /// <summary>Parses sheet text; never throws.</summary>
-    public static SheetSyntax Parse(string text, string? path = null) => Parsing.SheetParser.Parse(new SourceText(text, path));
+    public static SheetSyntax Parse(string text, string? path = null) => Parsing.SheetParser.Parse(new SourceText(text, path), null);
 
-    public static SheetSyntax Parse(SourceText source) => Parsing.SheetParser.Parse(source);
+    public static SheetSyntax Parse(SourceText source) => Parsing.SheetParser.Parse(source, null);
+
+    /// <summary>
+    /// Parses an edited version of a sheet, taking over from <paramref name="previous"/> (an earlier
+    /// parse of the same sheet) every statement whose text and place the edit left unchanged. The
+    /// result is the same as a fresh parse; an editor that re-parses on every keystroke saves the
+    /// parse of all but the edited statements.
+    /// </summary>
+    public static SheetSyntax Parse(SourceText source, SheetSyntax? previous) => Parsing.SheetParser.Parse(source, previous);
 }

@@ -23,13 +23,15 @@ public sealed class SheetScheduler(ServerState state, DocumentStore documents, D
         var text = document.Text;
         int version = document.Version;
         var options = new RunOptions { Sources = new OpenDocumentSource(documents), WorkspaceRoot = state.WorkspaceRoot };
+        // The last finished version's parse: statements the edit did not touch are taken from it.
+        var previous = document.Finished;
         // No pause before evaluating: a newer version cancels this one (its result is never
         // published), so a burst of keystrokes costs at most some discarded work, and a single
         // edit is answered as soon as the sheet is evaluated.
         var evaluation = Task.Run(() =>
         {
             superseded.ThrowIfCancellationRequested();
-            var analysis = SheetAnalysis.Evaluate(text, version, options);
+            var analysis = SheetAnalysis.Evaluate(text, version, options, previous);
             superseded.ThrowIfCancellationRequested();
             return analysis;
         }, superseded);

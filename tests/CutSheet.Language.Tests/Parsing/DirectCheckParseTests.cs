@@ -52,5 +52,5 @@ public class DirectCheckParseTests
     }
 
     private static string Dump(SourceText source, StatementSyntax statement) =>
-        SyntaxDumper.Dump(new SheetSyntax(source, [statement], Array.Empty<Diagnostic>()));
+        SyntaxDumper.Dump(new SheetSyntax(source, [statement], [], []));
 }
