@@ -50,15 +50,16 @@ public sealed class SheetSyntax
     }
 
     /// <summary>Parses sheet text; never throws.</summary>
-    public static SheetSyntax Parse(string text, string? path = null) => Parsing.SheetParser.Parse(new SourceText(text, path), null);
+    public static SheetSyntax Parse(string text, string? path = null) => Parsing.SheetParser.Parse(new SourceText(text, path), null, keepRecords: false);
 
-    public static SheetSyntax Parse(SourceText source) => Parsing.SheetParser.Parse(source, null);
+    public static SheetSyntax Parse(SourceText source) => Parsing.SheetParser.Parse(source, null, keepRecords: false);
 
     /// <summary>
     /// Parses an edited version of a sheet, taking over from <paramref name="previous"/> (an earlier
     /// parse of the same sheet) every statement whose text and place the edit left unchanged. The
     /// result is the same as a fresh parse; an editor that re-parses on every keystroke saves the
-    /// parse of all but the edited statements.
+    /// parse of all but the edited statements. Pass null for the first version: only a parse made
+    /// through this overload keeps what a later one can take over.
     /// </summary>
-    public static SheetSyntax Parse(SourceText source, SheetSyntax? previous) => Parsing.SheetParser.Parse(source, previous);
+    public static SheetSyntax Parse(SourceText source, SheetSyntax? previous) => Parsing.SheetParser.Parse(source, previous, keepRecords: true);
 }

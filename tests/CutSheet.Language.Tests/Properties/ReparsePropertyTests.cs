@@ -25,7 +25,7 @@ public class ReparsePropertyTests
         Edits.Sample(c =>
         {
             var (name, text) = SheetMutationGen.Corpus[c.Index];
-            var previous = SheetSyntax.Parse(new SourceText(text, "/work/sheet.cutsheet"));
+            var previous = SheetSyntax.Parse(new SourceText(text, "/work/sheet.cutsheet"), null);
             foreach (var edit in c.Edits)
             {
                 text = edit.ApplyTo(text);
@@ -46,7 +46,7 @@ public class ReparsePropertyTests
     {
         const string before = "a = 1 mm\nb = a * 2\nc = b + 1 mm\n";
         const string after = "a = 1 mm\nb = a * 3\nc = b + 1 mm\n";
-        var first = SheetSyntax.Parse(before);
+        var first = SheetSyntax.Parse(new SourceText(before), null);
         var second = SheetSyntax.Parse(new SourceText(after), first);
         Assert.Same(first.Statements[0], second.Statements[0]);
         Assert.NotSame(first.Statements[1], second.Statements[1]);
@@ -54,5 +54,8 @@ public class ReparsePropertyTests
         // An insertion moves every later statement: those are parsed again, at their new places.
         var third = SheetSyntax.Parse(new SourceText("x = 2\n" + after), second);
         Assert.All(third.Statements, s => Assert.DoesNotContain(s, second.Statements));
+        // A command line's parse keeps nothing to take over.
+        var plain = SheetSyntax.Parse(before);
+        Assert.NotSame(plain.Statements[0], SheetSyntax.Parse(new SourceText(after), plain).Statements[0]);
     }
 }

@@ -21,7 +21,8 @@ internal static class SheetParser
     /// <summary>Enough for a list of 10,000 values; long chains are parsed and evaluated without deep recursion.</summary>
     private const int MaxTokensPerStatement = 25_000;
 
-    public static SheetSyntax Parse(SourceText source, SheetSyntax? previous)
+    /// <param name="keepRecords">Keep what each statement gave, so that this parse can serve a later re-parse; only editors re-parse, and the records cost a command line ~4 % of a parse.</param>
+    public static SheetSyntax Parse(SourceText source, SheetSyntax? previous, bool keepRecords)
     {
         // Tokens and significant tokens are needed only while parsing (no node keeps them), so both
         // live in pooled arrays; should parsing throw, they are simply not handed back.
@@ -31,25 +32,32 @@ internal static class SheetParser
         // A statement starts a line, so the line count bounds the statement count.
         var statements = new List<StatementSyntax>(source.LineCount);
         var pool = new StringPool(source.LineCount);
-        var records = new List<StatementRecord>(source.LineCount);
+        var records = keepRecords ? new List<StatementRecord>(source.LineCount) : null;
         var reuse = previous is null ? null : new StatementReuse(previous);
         var groups = new StatementGroups(tokens.AsSpan(), significant);
         while (groups.MoveNext(out var group))
         {
             var groupTokens = significant.AsSpan(group.Start, group.Count);
-            var (start, end, hash) = StatementRecord.Describe(groupTokens, group.Comment);
-            int before = diagnostics.Count;
             StatementSyntax? statement;
-            if (reuse is not null && reuse.TryTake(source.Text, start, end, hash, out statement, out var earlier))
-                diagnostics.AddRange(earlier);
-            else
+            if (records is null)
+            {
                 statement = ParseStatement(source, groupTokens, group.Comment, diagnostics, pool);
-            records.Add(new StatementRecord(start, end, hash, statement, before, diagnostics.Count - before));
+            }
+            else
+            {
+                var (start, end, hash) = StatementRecord.Describe(groupTokens, group.Comment);
+                int before = diagnostics.Count;
+                if (reuse is not null && reuse.TryTake(source.Text, start, end, hash, out statement, out var earlier))
+                    diagnostics.AddRange(earlier);
+                else
+                    statement = ParseStatement(source, groupTokens, group.Comment, diagnostics, pool);
+                records.Add(new StatementRecord(start, end, hash, statement, before, diagnostics.Count - before));
+            }
             if (statement is not null) statements.Add(statement);
         }
         ArrayPool<SyntaxToken>.Shared.Return(significant);
         tokens.Release();
-        return new SheetSyntax(source, statements, diagnostics, records.ToArray());
+        return new SheetSyntax(source, statements, diagnostics, records?.ToArray() ?? []);
     }
 
     private static StatementSyntax? ParseStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, SyntaxToken? comment, List<Diagnostic> diagnostics, StringPool pool)
