@@ -181,6 +181,19 @@ for (let i = 0; i < EDITS; i++) {
   editMs.push(r.ms);
 }
 
+// Typing: insert a 0 after the step's last digit on a random chain line (0.2d → 0.2d0, the same value),
+// then delete it again. Unlike the replacements above these change the length of the text, so every
+// statement after the edit moves and is parsed again; the figure shows what typing costs.
+const typeMs = [];
+for (let i = 0; i < EDITS; i += 2) {
+  const line = big.chain[Math.floor(rand() * big.chain.length)];
+  const col = big.lines[line].indexOf('+ 0.2') + 6;
+  const insert = await s.change(uri, [{ range: { start: { line, character: col }, end: { line, character: col } }, text: '0' }]);
+  const remove = await s.change(uri, [{ range: { start: { line, character: col }, end: { line, character: col + 1 } }, text: '' }]);
+  if (insert.p.diagnostics.length || remove.p.diagnostics.length) nonEmpty++;
+  typeMs.push(insert.ms, remove.ms);
+}
+
 // Hover on the defined name of a random chain line; completion after the "x" that starts its right side,
 // then (when the server offers it) completionItem/resolve of the first item, as an editor does for the selected one.
 const hoverMs = [], completionMs = [], resolveMs = [];
@@ -242,6 +255,7 @@ console.log('\n| what | figure | target | verdict |\n|---|---:|---|---|');
 for (const r of rows) console.log(`| ${r.join(' | ')} |`);
 console.log(`\nload average at end ${loadEnd}`);
 console.log(`edits: min ${f(Math.min(...editMs))}, p10 ${f(pct(editMs, 0.1))}, p90 ${f(pct(editMs, 0.9))} ms; ${nonEmpty} of ${EDITS} publications had diagnostics (expected 0)`);
+console.log(`typing (${typeMs.length} edits that insert or delete a character, moving every later statement): p50 ${f(pct(typeMs, 0.5))}, p90 ${f(pct(typeMs, 0.9))}, p99 ${f(pct(typeMs, 0.99))} ms (max ${f(Math.max(...typeMs))})`);
 console.log(`hover: ${hoverEmpty} empty answers; completion: ${completionEmpty} empty answers (of ${QUERIES} each), ${Math.round(completionItems / QUERIES)} items and ${(completionBytes / QUERIES / 1024).toFixed(1)} KiB of JSON per answer on average, ${completionIncomplete} marked incomplete`);
 console.log(resolves
   ? `completionItem/resolve (advertised): first item of each answer resolved, p50 / p99 ${f(pct(resolveMs, 0.5))} / ${f(pct(resolveMs, 0.99))} ms`
