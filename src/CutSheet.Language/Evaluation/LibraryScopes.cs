@@ -24,5 +24,7 @@ internal static class LibraryScopes
     public static (SheetScope Scope, SheetResult Result) Get(string name, SheetSyntax syntax, RunOptions options) =>
         Loaded.GetOrAdd((name, options.Units, options.Digits), key => new Lazy<(SheetScope, SheetResult)>(
             () => SheetEvaluator.EvaluateScope(syntax, RunOptions.Default with { Units = key.Units, Digits = key.Digits }, new ImportContext(), NoOverrides, key.Name),
-            LazyThreadSafetyMode.ExecutionAndPublication)).Value;
+            // Publication only: should an evaluation ever throw, the next run tries again instead of
+            // meeting a cached exception; threads that race all get the one value published first.
+            LazyThreadSafetyMode.PublicationOnly)).Value;
 }
