@@ -13,12 +13,8 @@ namespace CutSheet.Language.Tests.Properties;
 /// </summary>
 public class ReparsePropertyTests
 {
-    private static readonly Gen<SheetMutation> Mutation =
-        Gen.Select(Gen.Int[0, SheetMutation.KindCount - 1], Gen.Int[0, 100_000], Gen.Int[0, 100_000], AnyTextGen.Char, TokenSoupGen.Piece,
-            (kind, position, other, c, piece) => new SheetMutation(kind, position, other, c, piece));
-
     private static readonly Gen<(int Index, SheetMutation[] Edits)> Edits =
-        Gen.Select(Gen.Int[0, Math.Max(0, SheetMutationGen.Corpus.Length - 1)], Mutation.Array[1, 8]);
+        Gen.Select(Gen.Int[0, Math.Max(0, SheetMutationGen.Corpus.Length - 1)], SheetMutationGen.Mutation.Array[1, 8]);
 
     [Fact]
     public void ReparseAfterEachEditEqualsAFreshParse() =>

@@ -14,7 +14,8 @@ public static class SheetMutationGen
     public static readonly (string Name, string Text)[] Corpus =
         SheetCorpus.FileSheets.Concat(SheetCorpus.CaseSheets).ToArray();
 
-    private static readonly Gen<SheetMutation> Mutation =
+    /// <summary>One edit of a sheet: a kind, places in the text, and a character or token to put there.</summary>
+    public static readonly Gen<SheetMutation> Mutation =
         Gen.Select(Gen.Int[0, SheetMutation.KindCount - 1], Gen.Int[0, 100_000], Gen.Int[0, 100_000], AnyTextGen.Char, TokenSoupGen.Piece,
             (kind, position, other, c, piece) => new SheetMutation(kind, position, other, c, piece));
 
