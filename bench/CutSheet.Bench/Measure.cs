@@ -42,6 +42,12 @@ internal static class Measure
             double last = history.TakeLast(5).Min(), before = history.SkipLast(5).TakeLast(5).Min();
             if (last >= 0.97 * before) break;
         }
+        return Timed(body, runs, inner);
+    }
+
+    /// <summary><paramref name="runs"/> timed runs with no warm-up, each after a full collection.</summary>
+    public static Timing Timed(Func<double> body, int runs, int inner = 1)
+    {
         var times = new double[runs];
         var cpu = new double[runs];
         double alloc = 0, pause = 0, g0 = 0, g1 = 0, g2 = 0;

@@ -23,7 +23,7 @@ if (opts.Help)
           --runs N         timed runs per in-process figure (default 15)
           --warmup N       evaluations of the sheet before any timing (default 150: lets tiered JIT settle)
           --cold-runs N    fresh processes per cold figure (default 10)
-          --pint-runs N    timed pint runs (default 7)
+          --pint-runs N    pint runs, each timed between two blocks of CutSheet runs (default 9)
           --no-pint  --no-cold  --no-kinds  --no-phases
           --raw            also print every timed run (on standard error)
           --loop S [--loop-kind KIND]   only evaluate the sheet (or a sheet of one kind of line) for S seconds,
@@ -113,11 +113,8 @@ var tRun = Measure.Run(() => SheetRunner.Run(text).Statements.Count, opts.Runs, 
 var tFloor = Measure.Run(() => floor.Run(opts.Lines), opts.Runs, inner: 200);
 double cutX = Si(result, $"x{floor.LastX}"), cutF = Si(result, $"F{floor.LastF}");
 
-PintResult? pint = null;
-if (!opts.NoPint) pint = RunPint(Path.Combine(root, "bench", "CutSheet.Bench", "pint_chain.py"), pyBodyPath, opts.PintRuns);
-// CutSheet again right after pint: the shared host has slow spells lasting seconds, so the two
-// measurements bracket pint in time and the ratio uses their mean, not one side's luck.
-Timing? tRunAfter = pint is null ? null : Measure.Run(() => SheetRunner.Run(text).Statements.Count, opts.Runs, warmupSeconds: 1.0);
+PintResult? pint = opts.NoPint ? null
+    : PintComparison.Run(Path.Combine(root, "bench", "CutSheet.Bench", "pint_chain.py"), pyBodyPath, opts.PintRuns, () => SheetRunner.Run(text).Statements.Count);
 
 var cold = new List<(string Mode, string Binary, Timing Version, Timing Tiny, Timing Bench, long Bytes)>();
 var spawn = new Timing();
@@ -146,8 +143,6 @@ int n = opts.Lines;
 double runUs = tRun.PerLineUs(n), floorUs = tFloor.PerLineUs(n);
 double runCpuUs = tRun.CpuMs * 1000 / n;
 double pintMs = pint?.MedianMs ?? double.NaN, pintCpuMs = pint?.CpuMedianMs ?? double.NaN;
-double bracketMs = tRunAfter is { } after ? (tRun.MedianMs + after.MedianMs) / 2 : tRun.MedianMs;
-double bracketCpuMs = tRunAfter is { } afterCpu ? (tRun.CpuMs + afterCpu.CpuMs) / 2 : tRun.CpuMs;
 Console.WriteLine("## Side by side (one run; warm medians: wall time, and CPU time of the thread in brackets)");
 Console.WriteLine();
 Console.WriteLine("| what | per sheet | µs per line | ratio | final x, F (SI: m, N) |");
@@ -155,14 +150,15 @@ Console.WriteLine("|---|---:|---:|---|---|");
 Console.WriteLine($"| CutSheet parse+bind+check+evaluate (`SheetRunner.Run`) | {Ms(tRun.MedianMs)} ms ({Ms(tRun.CpuMs)}) | {Us(runUs)} ({Us(runCpuUs)}) | 1 | {cutX:R}, {cutF:R} |");
 Console.WriteLine($"| plain C# doubles (the floor) | {Ms(tFloor.MedianMs)} ms ({Ms(tFloor.CpuMs)}) | {Us(floorUs)} ({Us(tFloor.CpuMs * 1000 / n)}) | CutSheet takes {tRun.MedianMs / tFloor.MedianMs:F0}× ({tRun.CpuMs / tFloor.CpuMs:F0}×) the floor | {floor.X(floor.LastX):R}, {floor.Force(floor.LastF):R} |");
 if (pint is not null)
-    Console.WriteLine($"| pint {pint.Version} (Python {pint.Python}), timed inside Python | {Ms(pintMs)} ms ({Ms(pintCpuMs)}) | {Us(pintMs * 1000 / n)} ({Us(pintCpuMs * 1000 / n)}) | CutSheet is {pintMs / bracketMs:F0}× ({pintCpuMs / bracketCpuMs:F0}×) faster | {pint.X:R}, {pint.F:R} |");
-if (tRunAfter is { } again)
-    Console.WriteLine($"| CutSheet again, right after pint (the pint ratio uses the mean of both CutSheet figures) | {Ms(again.MedianMs)} ms ({Ms(again.CpuMs)}) | {Us(again.PerLineUs(n))} ({Us(again.CpuMs * 1000 / n)}) | — | — |");
+{
+    Console.WriteLine($"| pint {pint.Version} (Python {pint.Python}), timed inside Python, one run per pair | {Ms(pintMs)} ms ({Ms(pintCpuMs)}) | {Us(pintMs * 1000 / n)} ({Us(pintCpuMs * 1000 / n)}) | CutSheet is {pint.Ratio:F0}× ({pint.RatioCpu:F0}×) faster (median of the per-pair ratios) | {pint.X:R}, {pint.F:R} |");
+    Console.WriteLine($"| CutSheet in the pairs ({opts.PintRuns} pairs; each the mean of 5-run medians just before and just after the pint run) | {Ms(pint.CutSheetMs)} ms ({Ms(pint.CutSheetCpuMs)}) | {Us(pint.CutSheetMs * 1000 / n)} ({Us(pint.CutSheetCpuMs * 1000 / n)}) | — | — |");
+}
 foreach (var c in cold)
     Console.WriteLine($"| cold `cutsheet check bench.cutsheet`, {ModeName(c.Mode)}, fresh process (CPU: user+sys) | {Ms(c.Bench.MedianMs)} ms ({Ms(c.Bench.CpuMs)}) | — | — | — |");
 Console.WriteLine();
 if (pint is not null)
-    Console.WriteLine($"pint outside the timing: interpreter start-up {pint.InterpreterMs:F0} ms, `import pint` + `UnitRegistry()` {pint.ImportMs:F0} ms, compiling the {n:N0}-line Python body {pint.CompileMs:F0} ms (whole process {pint.WallMs / 1000:F1} s); timed runs {pint.RunsText}.");
+    Console.WriteLine($"pint outside the timing: interpreter start-up {pint.InterpreterMs:F0} ms, `import pint` + `UnitRegistry()` {pint.ImportMs:F0} ms, compiling the {n:N0}-line Python body {pint.CompileMs:F0} ms (process start to ready {pint.StartMs / 1000:F1} s); timed runs {pint.RunsText}; per-pair ratios {pint.RatiosText}.");
 Console.WriteLine($"CutSheet allocates {Kb(tRun.AllocatedBytes / n)} KiB per line ({tRun.AllocatedBytes / 1048576:F1} MiB per sheet); GC pauses {tRun.GcText} per sheet (gen0/gen1/gen2 collections, after a full collection before each run); fastest run {Ms(tRun.MinMs)} ms.");
 Console.WriteLine();
 
@@ -175,7 +171,7 @@ double fr = tRun.MedianMs / tFloor.MedianMs, frc = tRun.CpuMs / tFloor.CpuMs;
 Console.WriteLine($"| ≤ 20× the floor | {fr:F0}× ({frc:F0}×) | {Verdict(fr <= 20, $"{fr / 20:F0}× over")} ({Verdict(frc <= 20, $"{frc / 20:F0}× over")}) |");
 if (pint is not null)
 {
-    double pr = pintMs / bracketMs, prc = pintCpuMs / bracketCpuMs;
+    double pr = pint.Ratio, prc = pint.RatioCpu;
     Console.WriteLine($"| ≥ 50× faster than pint | {pr:F0}× ({prc:F0}×) | {Verdict(pr >= 50, $"short by {50 / pr:F1}×")} ({Verdict(prc >= 50, $"short by {50 / prc:F1}×")}) |");
 }
 foreach (var c in cold)
@@ -301,36 +297,6 @@ static string CpuModel()
     try { return File.ReadLines("/proc/cpuinfo").First(l => l.StartsWith("model name")).Split(':', 2)[1].Trim(); } catch { return "?"; }
 }
 
-static PintResult? RunPint(string script, string body, int runs)
-{
-    var psi = new ProcessStartInfo("/usr/bin/python3") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
-    psi.ArgumentList.Add(script);
-    psi.ArgumentList.Add(body);
-    psi.ArgumentList.Add(runs.ToString(CultureInfo.InvariantCulture));
-    psi.ArgumentList.Add("1");
-    var sw = Stopwatch.StartNew();
-    Process p;
-    try { p = Process.Start(psi)!; } catch (Exception ex) { Console.WriteLine($"pint: cannot start /usr/bin/python3: {ex.Message}"); return null; }
-    string stdout = p.StandardOutput.ReadToEnd();
-    string stderr = p.StandardError.ReadToEnd();
-    p.WaitForExit();
-    double wall = sw.Elapsed.TotalMilliseconds;
-    if (p.ExitCode != 0) { Console.WriteLine($"pint failed (apt-get install python3-pint): {stderr.Trim()}"); return null; }
-    using var doc = JsonDocument.Parse(stdout);
-    var e = doc.RootElement;
-    var times = e.GetProperty("runs_s").EnumerateArray().Select(x => x.GetDouble() * 1000).ToArray();
-    var cpuTimes = e.GetProperty("cpu_s").EnumerateArray().Select(x => x.GetDouble() * 1000).OrderBy(x => x).ToArray();
-    var sorted = times.OrderBy(x => x).ToArray();
-    // Interpreter start-up on its own: fresh `python3 -c pass` processes.
-    var interp = Measure.Process("/usr/bin/python3", ["-c", "pass"], Environment.CurrentDirectory, 5);
-    return new PintResult(
-        e.GetProperty("pint").GetString()!, e.GetProperty("python").GetString()!, Measure.Median(sorted), Measure.Median(cpuTimes),
-        e.GetProperty("import_s").GetDouble() * 1000, interp.MedianMs,
-        e.GetProperty("compile_s").GetDouble() * 1000, wall,
-        e.GetProperty("x_m").GetDouble(), e.GetProperty("F_N").GetDouble(),
-        string.Join(", ", times.Select(t => t.ToString("F0", CultureInfo.InvariantCulture))) + " ms");
-}
-
 static void Publish(string root, string outDir)
 {
     var modes = new (string Mode, string[] Args)[]
@@ -357,13 +323,10 @@ static void Publish(string root, string outDir)
     Console.WriteLine();
 }
 
-internal sealed record PintResult(string Version, string Python, double MedianMs, double CpuMedianMs, double ImportMs, double InterpreterMs, double CompileMs, double WallMs,
-    double X, double F, string RunsText);
-
 internal sealed class Options
 {
     public bool Help, Publish, Once, NoPint, NoCold, NoKinds, NoPhases;
-    public int Lines = 10_000, Runs = 15, ColdRuns = 10, PintRuns = 7, WarmupSheets = 150;
+    public int Lines = 10_000, Runs = 15, ColdRuns = 10, PintRuns = 9, WarmupSheets = 150;
     public string? Out, LoopKind;
     public double LoopSeconds;
 
