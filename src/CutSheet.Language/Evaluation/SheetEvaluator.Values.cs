@@ -26,12 +26,8 @@ internal sealed partial class SheetEvaluator
     {
         var frame = StatementFrame(d.Span, recordDependencies: true);
         var value = _eval.Evaluate(d.Value, frame);
-        var clauses = d.Clauses;
         // The symbol Declare made for this very statement; a refused redefinition has none.
-        if (symbol is null)
-        {
-            return new DefinitionResult(d, line, d.Name, null, null, false, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value, false);
-        }
+        if (symbol is null) return new DefinitionResult(d, line, null, null, isInput: false, isOverridden: false);
         symbol.IsInput = !frame.DependsOnSheet;
         bool overridden = false;
         if (overrides.TryGetValue(d.Name, out var o))
@@ -71,7 +67,7 @@ internal sealed partial class SheetEvaluator
                     symbol.ChooseDisplayUnitLater(DeferredDisplayUnit.For(Presenter.ChoiceSystem));
                 }
                 // The shown value and the kind's name are made when the result is first read.
-                return new DefinitionResult(d, line, symbol, Presenter, clauses.Assumed is not null, clauses.Source?.Value, clauses.Description?.Value);
+                return new DefinitionResult(d, line, symbol, Presenter);
             case ValueKind.List:
                 var listUnit = Presenter.UnitFor(d.Value, new Quantity(value.List!.Values.FirstOrDefault(), value.List.Dimension, value.List.Tag));
                 shown = Presenter.PresentList(value.List, listUnit);
@@ -86,8 +82,7 @@ internal sealed partial class SheetEvaluator
                 kind = value.Choice!.Type.Name;
                 break;
         }
-        return new DefinitionResult(d, line, d.Name, shown, kind, symbol.IsInput, clauses.Assumed is not null, clauses.Source?.Value,
-            clauses.Description?.Value, overridden);
+        return new DefinitionResult(d, line, shown, kind, symbol.IsInput, overridden);
     }
 
     private Value EvaluateOverride(SheetSyntax syntax, DefinitionSyntax definition, DefinitionSyntax target)
