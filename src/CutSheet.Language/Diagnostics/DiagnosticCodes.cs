@@ -48,6 +48,7 @@ public static class DiagnosticCodes
     public const string PerRevTimesAngle = "CUT2303";
     public const string TorqueAsEnergy = "CUT2304";
     public const string OffsetArithmetic = "CUT2305";
+    public const string PlainNumberAsRadians = "CUT2306";
 
     // Names and imports
     public const string UnknownName = "CUT3001";

@@ -148,6 +148,11 @@ public static class DiagnosticMessages
     // Evaluation
     public const string DivisionByZero = "division by zero";
     public static string DomainError(string function, string detail) => $"{function}: {detail}";
+
+    public static string PlainNumberAsRadians(string function, string number, double degrees) =>
+        $"{function}({number}) reads the plain number {number} as radians ({Display.NumberFormatter.Format(degrees, 4)}°); if degrees were meant, write {number} deg";
+
+    public static string PlainNumberAsDegreesFix(string number) => $"read it as degrees: {number} deg";
     public const string NotFinite = "the result is not a finite number";
     public static string NumberNotFinite(string written) => $"'{written}' is not a finite number (too large, or a fraction over zero)";
     public static string RequirementFailed(string function, string condition, string? why) =>

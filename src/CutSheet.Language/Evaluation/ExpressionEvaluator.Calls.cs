@@ -37,6 +37,23 @@ internal sealed partial class ExpressionEvaluator
         return values;
     }
 
+    /// <summary>
+    /// <c>sin(30)</c>: a plain number is radians (ISO 80000-3, rad = 1), but a literal of more than
+    /// a full turn of radians is far likelier to be degrees written without their unit.
+    /// </summary>
+    private void PlainNumberAsRadians(CallSyntax call, EvalFrame f)
+    {
+        var argument = call.Arguments[0].Value;
+        var literal = argument as QuantityLiteralSyntax ?? (argument as UnarySyntax)?.Operand as QuantityLiteralSyntax;
+        if (literal is not { Unit: null } || Math.Abs(literal.Number) <= 2 * Math.PI) return;
+        bool negated = argument is UnarySyntax { Operator: UnaryOperator.Negate };
+        // The literal's own text: inside an imported function the spans are not this sheet's.
+        string number = (negated ? "-" : "") + literal.NumberText;
+        double value = negated ? -literal.Number : literal.Number;
+        var fix = new Fix(DiagnosticMessages.PlainNumberAsDegreesFix(number), [new TextEdit(new TextSpan(literal.Span.End, 0), " deg")]);
+        Warn(f, DiagnosticCodes.PlainNumberAsRadians, argument.Span, DiagnosticMessages.PlainNumberAsRadians(call.Callee.Name, number, value * 180 / Math.PI), fix);
+    }
+
     private Value CallBuiltin(CallSyntax call, EvalFrame f)
     {
         for (int i = 0; i < call.Arguments.Count; i++)
@@ -46,6 +63,7 @@ internal sealed partial class ExpressionEvaluator
         }
         var args = EvaluateArguments(call, f);
         foreach (var a in args) if (a.IsUnknown) return Value.Unknown;
+        if (call.Callee.Name is "sin" or "cos" or "tan" && call.Arguments.Count == 1) PlainNumberAsRadians(call, f);
         var result = Builtins.Call(call.Callee.Name, args, call, out var problem);
         if (problem is not null)
         {

@@ -52,6 +52,8 @@ public class DiagnosticMessageCheckTests
         new("rpm times length", "n = 1000 rpm\nD = 20 mm\nv = n * D / 2 as m/min\n", DiagnosticCodes.RpmTimesLength, M.RpmTimesLength),
         new("per revolution times angle", "P_h = 5 mm/rev\ntheta = 90 deg\nx = P_h * theta as mm\n", DiagnosticCodes.PerRevTimesAngle, M.PerRevTimesAngle),
         new("torque shown in J", "T = 10 N·m\nx = T as J\n", DiagnosticCodes.TorqueAsEnergy, M.TorqueAsEnergy),
+        // 45 rad = 45 × 180/π degrees = 2578.3° (the SI definition of the radian).
+        new("plain number as radians", "x = sin(45)\n", DiagnosticCodes.PlainNumberAsRadians, M.PlainNumberAsRadians("sin", "45", 45 * 180 / Math.PI)),
 
         // Names and functions
         new("unknown name", "x = zeta_q\n", DiagnosticCodes.UnknownName, M.UnknownName("zeta_q", null)),

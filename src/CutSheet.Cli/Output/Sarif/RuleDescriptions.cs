@@ -52,6 +52,7 @@ internal static class RuleDescriptions
         [DiagnosticCodes.PerRevTimesAngle] = "Per-revolution quantity times an angle",
         [DiagnosticCodes.TorqueAsEnergy] = "Torque shown in an energy unit",
         [DiagnosticCodes.OffsetArithmetic] = "Offset temperature scale used in arithmetic",
+        [DiagnosticCodes.PlainNumberAsRadians] = "Plain number beyond a full turn read as radians by a trigonometric function",
 
         // Names and imports
         [DiagnosticCodes.UnknownName] = "Name not defined",
