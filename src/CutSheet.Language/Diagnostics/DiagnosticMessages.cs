@@ -12,8 +12,8 @@ public static class DiagnosticMessages
     public static string UnexpectedCharacter(string c) => $"'{c}' is not part of the language";
     public static string Unexpected(string found, string expected) => $"unexpected {found}; expected {expected}";
     public const string UnterminatedString = "text in quotes is not closed before the end of the line";
-    public const string InchMark = "the inch mark \" is ambiguous in plain text; write the unit in";
-    public const string FootMark = "the foot mark ' is ambiguous in plain text; write the unit ft";
+    public const string InchMark = "the inch mark \" is ambiguous in plain text; write the unit 'in' instead";
+    public const string FootMark = "the foot mark ' is ambiguous in plain text; write the unit 'ft' instead";
     public static string DecimalComma(string written, string? fixedText) => fixedText is null
         ? $"'{written}' uses a comma as decimal mark or thousands separator; write a decimal point and no separators"
         : $"'{written}' uses a decimal comma; write a decimal point: {fixedText}";
@@ -24,6 +24,12 @@ public static class DiagnosticMessages
     public const string NotAStatement = "a line must define a name (name = …), a function, a check, a caution, a heading or a setting";
     public static string ClauseNotAllowed(string clause, string statement) => $"'{clause}' cannot be written on {statement}";
     public const string UnitWithoutNumber = "a unit is written only after a number or after 'as'";
+
+    public static string SideBySide(string first, string second, bool sameDimension) => sameDimension
+        ? $"two quantities side by side, '{first}' and '{second}'; to add them, write {first} + {second}"
+        : $"two quantities side by side, '{first}' and '{second}'; join them with an operator (+, -, *, /)";
+
+    public static string SideBySideFix(string first, string second) => $"add them: {first} + {second}";
 
     // Units
     public const string EmptyUnit = "the unit is empty";

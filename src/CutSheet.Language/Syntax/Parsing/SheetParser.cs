@@ -192,7 +192,26 @@ internal static class SheetParser
         {
             return Diagnostic.Error(DiagnosticCodes.UnitWithoutNumber, token.Span, DiagnosticMessages.UnitWithoutNumber);
         }
+        if (token.Kind == TokenKind.Number && index >= 2 && tokens[index - 1].Kind == TokenKind.Unit && tokens[index - 2].Kind == TokenKind.Number)
+            return SideBySide(source, tokens, index);
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.Unexpected(Describe(token.Kind, source.Slice(token.Span)), expected));
+    }
+
+    /// <summary>
+    /// <c>5 ft 3 in</c>: two quantities with nothing between them. Shop drawings write feet and
+    /// inches this way, so when both units measure the same thing the fix adds them.
+    /// </summary>
+    private static Diagnostic SideBySide(SourceText source, ReadOnlySpan<SyntaxToken> tokens, int index)
+    {
+        var number = tokens[index];
+        var end = index + 1 < tokens.Length && tokens[index + 1].Kind == TokenKind.Unit ? tokens[index + 1] : number;
+        string first = source.Slice(TextSpan.FromBounds(tokens[index - 2].Start, tokens[index - 1].End));
+        string second = source.Slice(TextSpan.FromBounds(number.Start, end.End));
+        var a = Units.UnitCatalog.Default.Resolve(source.Slice(tokens[index - 1].Span)).Unit;
+        var b = end.Kind == TokenKind.Unit ? Units.UnitCatalog.Default.Resolve(source.Slice(end.Span)).Unit : null;
+        bool same = a is not null && b is not null && a.Dimension.SiEquals(b.Dimension);
+        var fix = same ? new Fix(DiagnosticMessages.SideBySideFix(first, second), [new TextEdit(new TextSpan(number.Start, 0), "+ ")]) : null;
+        return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, TextSpan.FromBounds(number.Start, end.End), DiagnosticMessages.SideBySide(first, second, same), fix);
     }
 
     private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment) =>
