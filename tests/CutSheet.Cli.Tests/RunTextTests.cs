@@ -122,6 +122,16 @@ public sealed partial class RunTextTests
     }
 
     [Fact]
+    public void Set_refuses_a_value_of_another_dimension()
+    {
+        // F is a force in demo.cutsheet; a plain 2200 cannot stand in for it, and T, which needs F, stays unknown.
+        var outcome = CliDriver.Run("run", "demo.cutsheet", "--set", "F=2200");
+        Assert.Equal(1, outcome.ExitCode);
+        Assert.Contains(Lines(outcome), l => l.StartsWith("demo.cutsheet:5:1: error CUT2112 --set F: ", StringComparison.Ordinal));
+        Assert.Matches(@"^\s*6\s+T\s+\?", RowOf(outcome, 6, "T"));
+    }
+
+    [Fact]
     public void Units_inch_shows_computed_values_in_inch()
     {
         // L = 2 × 25.4 mm = 50.8 mm = 2 in exactly [calc]

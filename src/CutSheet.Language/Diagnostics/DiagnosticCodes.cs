@@ -38,6 +38,7 @@ public static class DiagnosticCodes
     public const string AngleWithout2Pi = "CUT2108";
     public const string CountMix = "CUT2110";
     public const string KindMismatch = "CUT2111";
+    public const string OverrideMismatch = "CUT2112";
     public const string ArgumentDimension = "CUT2201";
     public const string ArgumentRotation = "CUT2202";
     public const string ArgumentCount = "CUT2203";

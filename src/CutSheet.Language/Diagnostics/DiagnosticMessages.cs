@@ -110,6 +110,10 @@ public static class DiagnosticMessages
     public static string ImportClash(string name, string first, string second) => $"'{name}' is imported from both {first} and {second}; import one with 'as' to qualify its names";
     public static string OverrideNotInput(string name, string sheet) => $"'{name}' is not an input of {sheet}; only definitions that depend on no other definition can be overridden";
     public static string OverrideUnknown(string name, string sheet) => $"{sheet} has no definition '{name}'";
+    public static string OverrideDimension(string name, Dimension own, Dimension given) =>
+        $"the sheet gives '{name}' as {Kinds.Describe(own)} ({own.ToSiString()}); the value set is {Kinds.Describe(given)} ({given.ToSiString()}), so it cannot stand in";
+    public static string OverrideValueKind(string name, string own, string given) =>
+        $"the sheet gives '{name}' as {own}; the value set is {given}, so it cannot stand in";
     public static string UnknownKind(string name, string? suggestion) =>
         suggestion is null ? $"'{name}' is not a kind of quantity" : $"'{name}' is not a kind of quantity; did you mean '{suggestion}'?";
     public static string NotAFunction(string name) => $"'{name}' is a value, not a function";

@@ -92,6 +92,8 @@ internal sealed partial class SheetEvaluator
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideUnknown(o.Name, label)));
                 else if (!target.IsInput)
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideNotInput(o.Name, label)));
+                else if (scope.RefusedOverrides.TryGetValue(o.Name, out var refused))
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideMismatch, o.Value.Span, refused));
             }
             Register(use, scope, label);
         }

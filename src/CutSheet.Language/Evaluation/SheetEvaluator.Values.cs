@@ -30,6 +30,8 @@ internal sealed partial class SheetEvaluator
         if (symbol is null) return new DefinitionResult(d, line, null, null, isInput: false, isOverridden: false);
         symbol.IsInput = !frame.DependsOnSheet;
         bool overridden = false;
+        // What the sheet itself gives, when it gives anything: an override must be the same kind of value.
+        var own = _sink.StatementHasError ? Value.Unknown : value;
         if (overrides.TryGetValue(d.Name, out var o))
         {
             if (!symbol.IsInput)
@@ -40,12 +42,22 @@ internal sealed partial class SheetEvaluator
             {
                 value = EvaluateOverride(o.Syntax, o.Definition, d);
                 overridden = true;
+                if (OverrideMismatch(d.Name, own, value) is { } mismatch)
+                {
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideMismatch, d.NameSpan, $"--set {d.Name}: {mismatch}"));
+                    value = Value.Unknown;
+                }
             }
         }
         else if (_importOverrides.TryGetValue(d.Name, out var imported) && symbol.IsInput)
         {
             value = imported;
             overridden = true;
+            if (OverrideMismatch(d.Name, own, value) is { } mismatch)
+            {
+                _scope.RefusedOverrides[d.Name] = mismatch;
+                value = Value.Unknown;
+            }
         }
         if (_sink.StatementHasError && !overridden) value = Value.Unknown;
 
@@ -83,6 +95,20 @@ internal sealed partial class SheetEvaluator
                 break;
         }
         return new DefinitionResult(d, line, shown, kind, symbol.IsInput, overridden);
+    }
+
+    /// <summary>Why an override cannot stand in for the sheet's own value, or null when it can (or the sheet gives none).</summary>
+    private static string? OverrideMismatch(string name, Value own, Value given)
+    {
+        if (own.IsUnknown || given.IsUnknown) return null;
+        if (own.Kind == ValueKind.Quantity && given.Kind == ValueKind.Quantity)
+        {
+            var (a, b) = (own.Quantity.Dimension, given.Quantity.Dimension);
+            return a.SiEquals(b) ? null : DiagnosticMessages.OverrideDimension(name, a, b);
+        }
+        bool same = own.Kind == given.Kind && (own.Kind != ValueKind.Choice || own.Choice!.Type == given.Choice!.Type)
+            && (own.Kind != ValueKind.List || own.List!.Dimension.SiEquals(given.List!.Dimension));
+        return same ? null : DiagnosticMessages.OverrideValueKind(name, own.Describe(), given.Describe());
     }
 
     private Value EvaluateOverride(SheetSyntax syntax, DefinitionSyntax definition, DefinitionSyntax target)

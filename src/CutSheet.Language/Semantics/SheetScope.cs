@@ -23,6 +23,12 @@ public sealed class SheetScope(string? path, string displayName)
     public Dictionary<string, SheetScope> Namespaces { get; } = new(StringComparer.Ordinal);
     public Dictionary<string, Units.Kind> Kinds { get; } = new(StringComparer.Ordinal);
 
+    /// <summary>
+    /// Inputs whose override from an importer's <c>with</c> was refused because it is not the same
+    /// kind of value as the sheet's own, with the reason; the importer reports it at its value.
+    /// </summary>
+    public Dictionary<string, string> RefusedOverrides { get; } = new(StringComparer.Ordinal);
+
     /// <summary>Symbols brought in by unqualified imports, with the sheet each came from.</summary>
     public Dictionary<string, (object Symbol, SheetScope From)> Imported { get; } = new(StringComparer.Ordinal);
 

@@ -53,6 +53,8 @@ public class DiagnosticMessageCheckTests
         new("torque times rpm", "T = 10 N·m\nn = 100 rpm\nP = T * n as W\n", DiagnosticCodes.TorqueTimesRpm, M.TorqueTimesRpm),
         new("rpm times length", "n = 1000 rpm\nD = 20 mm\nv = n * D / 2 as m/min\n", DiagnosticCodes.RpmTimesLength, M.RpmTimesLength),
         new("per revolution times angle", "P_h = 5 mm/rev\ntheta = 90 deg\nx = P_h * theta as mm\n", DiagnosticCodes.PerRevTimesAngle, M.PerRevTimesAngle),
+        new("override of another dimension", "use ballscrews with (E_steel = 206 mm)\n", DiagnosticCodes.OverrideMismatch,
+            M.OverrideDimension("E_steel", Dimension.FromSi(-1, 1, -2), L)),
         new("torque shown in J", "T = 10 N·m\nx = T as J\n", DiagnosticCodes.TorqueAsEnergy, M.TorqueAsEnergy),
         // 45 rad = 45 × 180/π degrees = 2578.3° (the SI definition of the radian).
         new("plain number as radians", "x = sin(45)\n", DiagnosticCodes.PlainNumberAsRadians, M.PlainNumberAsRadians("sin", "45", 45 * 180 / Math.PI)),

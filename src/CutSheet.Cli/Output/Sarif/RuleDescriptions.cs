@@ -51,6 +51,7 @@ internal static class RuleDescriptions
         [DiagnosticCodes.RpmTimesLength] = "Rotational frequency times length without π",
         [DiagnosticCodes.PerRevTimesAngle] = "Per-revolution quantity times an angle",
         [DiagnosticCodes.TorqueAsEnergy] = "Torque shown in an energy unit",
+        [DiagnosticCodes.OverrideMismatch] = "Override of an input with a different kind of value",
         [DiagnosticCodes.OffsetArithmetic] = "Offset temperature scale used in arithmetic",
         [DiagnosticCodes.PlainNumberAsRadians] = "Plain number beyond a full turn read as radians by a trigonometric function",
 
