@@ -132,6 +132,14 @@ public sealed partial class RunTextTests
     }
 
     [Fact]
+    public void Set_of_a_mistyped_input_suggests_the_nearest_one()
+    {
+        var outcome = CliDriver.Run("run", "demo.cutsheet", "--set", "P_j=10 mm/rev");
+        Assert.Equal(1, outcome.ExitCode);
+        Assert.Contains(Lines(outcome), l => l.Contains("error CUT3011 ", StringComparison.Ordinal) && l.EndsWith("has no definition 'P_j'; did you mean 'P_h'?", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Units_inch_shows_computed_values_in_inch()
     {
         // L = 2 × 25.4 mm = 50.8 mm = 2 in exactly [calc]

@@ -109,7 +109,8 @@ public static class DiagnosticMessages
     public static string ImportCycle(string chain) => $"imports form a cycle: {chain}";
     public static string ImportClash(string name, string first, string second) => $"'{name}' is imported from both {first} and {second}; import one with 'as' to qualify its names";
     public static string OverrideNotInput(string name, string sheet) => $"'{name}' is not an input of {sheet}; only definitions that depend on no other definition can be overridden";
-    public static string OverrideUnknown(string name, string sheet) => $"{sheet} has no definition '{name}'";
+    public static string OverrideUnknown(string name, string sheet, string? suggestion = null) =>
+        suggestion is null ? $"{sheet} has no definition '{name}'" : $"{sheet} has no definition '{name}'; did you mean '{suggestion}'?";
     public static string OverrideDimension(string name, Dimension own, Dimension given) =>
         $"the sheet gives '{name}' as {Kinds.Describe(own)} ({own.ToSiString()}); the value set is {Kinds.Describe(given)} ({given.ToSiString()}), so it cannot stand in";
     public static string OverrideValueKind(string name, string own, string given) =>

@@ -89,7 +89,8 @@ internal sealed partial class SheetEvaluator
             foreach (var o in use.Overrides)
             {
                 if (!scope.Definitions.TryGetValue(o.Name, out var target))
-                    _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideUnknown(o.Name, label)));
+                    _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideUnknown(o.Name, label,
+                        ExpressionEvaluator.Suggest(o.Name, scope.Definitions.Values.Where(d => d.IsInput).Select(d => d.Name)))));
                 else if (!target.IsInput)
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideNotInput(o.Name, label)));
                 else if (scope.RefusedOverrides.TryGetValue(o.Name, out var refused))

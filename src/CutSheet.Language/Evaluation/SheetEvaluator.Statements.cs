@@ -35,10 +35,13 @@ internal sealed partial class SheetEvaluator
         foreach (var name in overrides.Keys)
         {
             if (!_scope.Definitions.ContainsKey(name))
-                _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, new TextSpan(0, 0), DiagnosticMessages.OverrideUnknown(name, _scope.DisplayName)));
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, new TextSpan(0, 0), DiagnosticMessages.OverrideUnknown(name, _scope.DisplayName, InputNear(name))));
         }
         return results;
     }
+
+    /// <summary>The sheet's input whose name is nearest to a mistyped one, for the suggestion.</summary>
+    private string? InputNear(string name) => ExpressionEvaluator.Suggest(name, _scope.Definitions.Values.Where(d => d.IsInput).Select(d => d.Name));
 
     /// <summary>Turns the cautions the statement fired into results and diagnostics, honouring <c>accepted</c>.</summary>
     private IReadOnlyList<CautionResult> FinishCautions(StatementSyntax statement)
