@@ -302,8 +302,9 @@ static void Publish(string root, string outDir)
     var modes = new (string Mode, string[] Args)[]
     {
         ("aot", ["-r", "linux-x64", "-p:PublishAot=true"]),
-        ("r2r", ["-r", "linux-x64", "--self-contained", "false", "-p:PublishReadyToRun=true"]),
-        ("jit", ["-r", "linux-x64", "--self-contained", "false"]),
+        // The project publishes Native AOT by default; the other two modes switch it off.
+        ("r2r", ["-r", "linux-x64", "--self-contained", "false", "-p:PublishAot=false", "-p:PublishReadyToRun=true"]),
+        ("jit", ["-r", "linux-x64", "--self-contained", "false", "-p:PublishAot=false"]),
     };
     foreach (var (mode, extra) in modes)
     {
