@@ -26,7 +26,8 @@ if (opts.Help)
           --pint-runs N    pint runs, each timed between two blocks of CutSheet runs (default 9)
           --no-pint  --no-cold  --no-kinds  --no-phases
           --raw            also print every timed run (on standard error)
-          --loop S [--loop-kind KIND]   only evaluate the sheet (or a sheet of one kind of line) for S seconds,
+          --loop S [--loop-kind KIND] [--loop-parsed]   only evaluate the sheet (or a sheet of one kind of line) for S seconds
+                   (--loop-parsed: parse it once and time binding and evaluation alone),
                            for a profiler (perf, dotnet-trace); see docs/performance.md
           --once           evaluate bench/out/bench.cutsheet once in this fresh process and print its GC count
           --out DIR        working folder (default bench/out)
@@ -85,6 +86,8 @@ if (opts.LoopSeconds > 0)
 {
     // For a profiler: `dotnet-trace collect -- dotnet CutSheet.Bench.dll --loop 20 [--loop-kind chain]`.
     string loopText = opts.LoopKind is null ? text : SheetGenerator.SingleKind(Enum.Parse<LineKind>(opts.LoopKind, ignoreCase: true), opts.Lines);
+    // --loop-parsed: parse once and evaluate that syntax again and again, to profile binding and evaluation alone.
+    var parsed = opts.LoopParsed ? SheetSyntax.Parse(loopText) : null;
     var loop = Stopwatch.StartNew();
     int iterations = 0;
     while (loop.Elapsed.TotalSeconds < opts.LoopSeconds)
@@ -93,7 +96,7 @@ if (opts.LoopSeconds > 0)
         GC.Collect();
         GC.WaitForPendingFinalizers();
         GC.Collect();
-        Measure.Sink += SheetRunner.Run(loopText).Statements.Count;
+        Measure.Sink += (parsed is null ? SheetRunner.Run(loopText) : SheetRunner.Run(parsed)).Statements.Count;
         iterations++;
     }
     Console.WriteLine($"- looped {iterations} times: {loop.Elapsed.TotalMilliseconds / iterations:F1} ms per sheet");
@@ -326,7 +329,7 @@ static void Publish(string root, string outDir)
 
 internal sealed class Options
 {
-    public bool Help, Publish, Once, NoPint, NoCold, NoKinds, NoPhases;
+    public bool Help, Publish, Once, NoPint, NoCold, NoKinds, NoPhases, LoopParsed;
     public int Lines = 10_000, Runs = 15, ColdRuns = 10, PintRuns = 9, WarmupSheets = 150;
     public string? Out, LoopKind;
     public double LoopSeconds;
@@ -355,6 +358,7 @@ internal sealed class Options
                 case "--out": o.Out = args[++i]; break;
                 case "--loop": o.LoopSeconds = double.Parse(args[++i], CultureInfo.InvariantCulture); break;
                 case "--loop-kind": o.LoopKind = args[++i]; break;
+                case "--loop-parsed": o.LoopParsed = true; break;
                 default: throw new ArgumentException($"unknown option {args[i]} (see --help)");
             }
         }
