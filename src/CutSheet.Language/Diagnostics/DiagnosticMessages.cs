@@ -24,6 +24,7 @@ public static class DiagnosticMessages
     public const string NotAStatement = "a line must define a name (name = …), a function, a check, a caution, a heading or a setting";
     public static string ClauseNotAllowed(string clause, string statement) => $"'{clause}' cannot be written on {statement}";
     public const string UnitWithoutNumber = "a unit is written only after a number or after 'as'";
+    public const string PlusMinusNotYet = "a tolerance written with ± is not in the language yet; write the typical value and give the range in the line's description";
 
     public static string SideBySide(string first, string second, bool sameDimension) => sameDimension
         ? $"two quantities side by side, '{first}' and '{second}'; to add them, write {first} + {second}"

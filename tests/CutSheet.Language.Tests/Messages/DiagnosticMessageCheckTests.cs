@@ -33,6 +33,7 @@ public class DiagnosticMessageCheckTests
         new("not a statement", "5 mm + 3\n", DiagnosticCodes.NotAStatement, M.NotAStatement),
         new("clause not allowed", "check 1 mm <= 2 mm assumed\n", DiagnosticCodes.ClauseNotAllowed, M.ClauseNotAllowed("assumed", "a check")),
         new("unit without number", "x = 2 mm\ny = x mm\n", DiagnosticCodes.UnitWithoutNumber, M.UnitWithoutNumber),
+        new("tolerance with plus-minus", "mu = 0.08 ± 0.02\n", DiagnosticCodes.UnexpectedToken, M.PlusMinusNotYet),
         new("feet and inches side by side", "h = 5 ft 3 in\n", DiagnosticCodes.UnexpectedToken, M.SideBySide("5 ft", "3 in", sameDimension: true)),
         new("force and length side by side", "M = 2 kN 0.5 m\n", DiagnosticCodes.UnexpectedToken, M.SideBySide("2 kN", "0.5 m", sameDimension: false)),
 

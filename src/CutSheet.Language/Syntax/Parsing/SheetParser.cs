@@ -194,6 +194,9 @@ internal static class SheetParser
         }
         if (token.Kind == TokenKind.Number && index >= 2 && tokens[index - 1].Kind == TokenKind.Unit && tokens[index - 2].Kind == TokenKind.Number)
             return SideBySide(source, tokens, index);
+        // Datasheets write tolerances this way; say that they are not taken yet rather than "unexpected".
+        if (token.Kind == TokenKind.PlusMinus)
+            return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.PlusMinusNotYet);
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.Unexpected(Describe(token.Kind, source.Slice(token.Span)), expected));
     }
 
