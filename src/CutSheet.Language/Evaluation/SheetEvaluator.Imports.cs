@@ -75,17 +75,6 @@ internal sealed partial class SheetEvaluator
                 _imports.Cache[cacheKey] = loaded;
             }
             var (scope, result) = loaded;
-            int errors = result.Diagnostics.Count(d => d.Severity == Severity.Error);
-            if (errors > 0)
-            {
-                // Point at the cause: through imports of imports, down to the first real error.
-                var first = result.Diagnostics.First(d => d.Severity == Severity.Error);
-                var cause = first.Code == DiagnosticCodes.ImportHasErrors && first.Related.Count > 0
-                    ? first.Related[0]
-                    : new RelatedLocation(first.Span, first.Message, first.Path ?? path);
-                _sink.Report(new Diagnostic(DiagnosticCodes.ImportHasErrors, Severity.Error, use.TargetSpan,
-                    DiagnosticMessages.ImportHasErrors(label, errors) + "; first: " + cause.Message, [cause], []));
-            }
             foreach (var o in use.Overrides)
             {
                 if (!scope.Definitions.TryGetValue(o.Name, out var target))
@@ -95,6 +84,19 @@ internal sealed partial class SheetEvaluator
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, o.NameSpan, DiagnosticMessages.OverrideNotInput(o.Name, label)));
                 else if (scope.RefusedOverrides.TryGetValue(o.Name, out var refused))
                     _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideMismatch, o.Value.Span, refused));
+            }
+            int errors = result.Diagnostics.Count(d => d.Severity == Severity.Error);
+            // A refused override leaves its input unknown, and the imported sheet's checks on it "not
+            // evaluated": those follow from the refusal just reported, which is the one to fix.
+            if (errors > 0 && scope.RefusedOverrides.Count == 0)
+            {
+                // Point at the cause: through imports of imports, down to the first real error.
+                var first = result.Diagnostics.First(d => d.Severity == Severity.Error);
+                var cause = first.Code == DiagnosticCodes.ImportHasErrors && first.Related.Count > 0
+                    ? first.Related[0]
+                    : new RelatedLocation(first.Span, first.Message, first.Path ?? path);
+                _sink.Report(new Diagnostic(DiagnosticCodes.ImportHasErrors, Severity.Error, use.TargetSpan,
+                    DiagnosticMessages.ImportHasErrors(label, errors) + "; first: " + cause.Message, [cause], []));
             }
             Register(use, scope, label);
         }
