@@ -97,6 +97,11 @@ public static class DiagnosticMessages
     public static string RedefinitionOfBuiltin(string name) => $"'{name}' is built into the language and cannot be defined again";
     public static string ImportedRedefinition(string name, string from) =>
         $"'{name}' is imported from {from}; to change an imported input, write it in the import: use {from} with ({name} = …)";
+    public static string InLibrary(string name, string library) => $"'{name}' is not defined in this sheet; the library {library} has it: add 'use {library}'";
+    public static string AddUseFix(string library) => $"add 'use {library}'";
+    public static string ImportedUnderAlias(string name, string library, string alias) =>
+        $"'{name}' comes from {library}, imported here as {alias}: write {alias}.{name}";
+    public static string QualifyFix(string alias, string name) => $"write {alias}.{name}";
     public static string UnknownFunction(string name, string? suggestion) =>
         suggestion is null ? $"'{name}' is not a function" : $"'{name}' is not a function; did you mean '{suggestion}'?";
     public static string TooManyArguments(string function, int max) => $"{function} takes at most {max} argument{(max == 1 ? "" : "s")}";

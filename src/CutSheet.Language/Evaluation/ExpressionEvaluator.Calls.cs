@@ -23,6 +23,7 @@ internal sealed partial class ExpressionEvaluator
             case null:
                 var names = f.Scope.Functions.Keys.Concat(f.Scope.Imported.Where(i => i.Value.Symbol is FunctionSymbol).Select(i => i.Key)).Concat(Builtins.FunctionNames);
                 EvaluateArguments(call, f);
+                if (LibraryHint(call.Callee, f, DiagnosticCodes.UnknownFunction)) return Value.Unknown;
                 return Error(f, DiagnosticCodes.UnknownFunction, call.Callee.Span, DiagnosticMessages.UnknownFunction(call.Callee.FullName, Suggest(call.Callee.Name, names)));
             default:
                 EvaluateArguments(call, f);

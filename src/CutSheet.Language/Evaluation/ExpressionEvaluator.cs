@@ -34,6 +34,9 @@ internal sealed partial class ExpressionEvaluator
         _currentLine = currentLine;
     }
 
+    /// <summary>The edit that adds <c>use LIBRARY</c> to the sheet, for the fix offered with an unknown name a library declares.</summary>
+    public Func<string, TextEdit>? UseLine { get; init; }
+
     public Value Evaluate(ExpressionSyntax e, EvalFrame f) => e switch
     {
         QuantityLiteralSyntax q => Literal(q, f),
@@ -166,7 +169,7 @@ internal sealed partial class ExpressionEvaluator
         var symbol = ResolveName(n, f, out var error);
         if (symbol is null)
         {
-            if (error is not null) Error(f, error.Value.Code, n.Span, error.Value.Message);
+            if (error is not null && !LibraryHint(n, f, DiagnosticCodes.UnknownName)) Error(f, error.Value.Code, n.Span, error.Value.Message);
             return Value.Unknown;
         }
         switch (symbol)
@@ -217,6 +220,25 @@ internal sealed partial class ExpressionEvaluator
             .Concat(f.Locals?.Keys ?? Enumerable.Empty<string>());
         error = (DiagnosticCodes.UnknownName, DiagnosticMessages.UnknownName(n.Name, Suggest(n.Name, candidates)));
         return null;
+    }
+
+    /// <summary>
+    /// A name this sheet does not know but a library sheet declares (<c>backdrive_torque</c> without
+    /// <c>use ballscrews</c>): says which library, with a fix that imports it, or that writes the
+    /// qualified name when the library is imported under an alias. False when no library has it.
+    /// </summary>
+    private bool LibraryHint(NameSyntax n, EvalFrame f, string code)
+    {
+        if (n.Qualifier is not null || f.Foreign || UseLine is null || Library.LibraryIndex.LibraryDeclaring(n.Name) is not { } library) return false;
+        foreach (var (alias, ns) in f.Scope.Namespaces)
+        {
+            if (ns.DisplayName != library || ns.FindOwn(n.Name) is null) continue;
+            Error(f, code, n.Span, DiagnosticMessages.ImportedUnderAlias(n.Name, library, alias),
+                new Fix(DiagnosticMessages.QualifyFix(alias, n.Name), [new TextEdit(n.Span, alias + "." + n.Name)]));
+            return true;
+        }
+        Error(f, code, n.Span, DiagnosticMessages.InLibrary(n.Name, library), new Fix(DiagnosticMessages.AddUseFix(library), [UseLine(library)]));
+        return true;
     }
 
     private Value UsedBeforeDefinition(NameSyntax n, DefinitionSymbol d, EvalFrame f)

@@ -41,7 +41,7 @@ internal sealed partial class SheetEvaluator
         _importOverrides = importOverrides;
         _scope = new SheetScope(_source.Path, displayName) { SourceText = _source };
         _display = DisplaySettings.Default;
-        _eval = new ExpressionEvaluator(_sink, _scope, _source, () => _currentLine, LastDependencyLine);
+        _eval = new ExpressionEvaluator(_sink, _scope, _source, () => _currentLine, LastDependencyLine) { UseLine = UseLineEdit };
     }
 
     public static SheetResult Evaluate(SourceText source, RunOptions options, ImportContext imports) =>
