@@ -23,4 +23,5 @@ public static class EditingMessages
     public static string CompletionOption(string choice) => $"option of {choice}";
 
     public static string CompletionImportedSheet(string sheet) => $"imported sheet {sheet}";
+    public static string CompletionFromLibrary(string library) => $"library {library} (adds 'use {library}')";
 }

@@ -148,7 +148,15 @@ test('completion: units after a number, Greek from a backslash name, names filte
   const odd = await server.connection.sendRequest(rpc.CompletionResolveRequest.type, { label: 'x', data: 42 });
   assert.deepEqual(odd, { label: 'x', data: 42 }, 'unreadable data: the item comes back unchanged');
 
-  const v4 = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 7 } }, text: '' }]);
+  // A library function the sheet does not import: the item also adds the use line after the last one.
+  const v6 = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 7 } }, text: 'x = backdr' }]);
+  await server.waitForDiagnostics(uri, (p) => p.version === v6);
+  const more = await server.connection.sendRequest(rpc.CompletionRequest.type, { textDocument: { uri }, position: { line: 9, character: 10 } });
+  const backdrive = more.items.find((i) => i.label === 'backdrive_torque');
+  assert.ok(backdrive, JSON.stringify(more.items.map((i) => i.label)));
+  assert.deepEqual(backdrive.additionalTextEdits, [{ range: { start: { line: 1, character: 0 }, end: { line: 1, character: 0 } }, newText: 'use ballscrews\n' }]);
+
+  const v4 = await server.change(uri, [{ range: { start: { line: 9, character: 0 }, end: { line: 9, character: 10 } }, text: '' }]);
   await server.waitForDiagnostics(uri, (p) => p.version === v4);
 });
 

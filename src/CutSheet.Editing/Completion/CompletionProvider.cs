@@ -1,6 +1,7 @@
 using CutSheet.Editing.Analysis;
 using CutSheet.Editing.Signatures;
 using CutSheet.Language.Evaluation;
+using CutSheet.Language.Library;
 using CutSheet.Language.Semantics;
 using CutSheet.Language.Syntax;
 using CutSheet.Language.Text;
@@ -178,9 +179,41 @@ public static class CompletionProvider
         foreach (var c in BuiltinCatalog.Constants.Keys)
             if (Fits(c) is var m and >= 0 && seen.Add(c))
                 yield return new(c, m, CompletionGroup.Builtin, 0, new CompletionEntry(c, CompletionCategory.Constant, c, replace, Detail: EditingMessages.CompletionConstant));
+        foreach (var candidate in LibraryCandidates(analysis, typed, replace, seen)) yield return candidate;
         foreach (var k in Keywords.All)
             if (Fits(k) is var m and >= 0 && seen.Add(k))
                 yield return new(k, m, CompletionGroup.Keyword, 0, new CompletionEntry(k, CompletionCategory.Keyword, k, replace));
+    }
+
+    /// <summary>
+    /// Names of library sheets the sheet does not import, once three letters of a name's start are
+    /// typed: choosing one also adds the <c>use</c> line. A library imported under an alias is left
+    /// to <c>alias.</c>, and a name the sheet already has is not offered again.
+    /// </summary>
+    private static IEnumerable<CompletionCandidate> LibraryCandidates(SheetAnalysis analysis, string typed, TextSpan replace, HashSet<string> seen)
+    {
+        if (typed.Length < 3) yield break;
+        var scope = analysis.Result.Scope;
+        var aliased = scope.Namespaces.Values.Select(ns => ns.DisplayName).ToHashSet(StringComparer.Ordinal);
+        var edits = new Dictionary<string, Language.Diagnostics.TextEdit>(StringComparer.Ordinal);
+        foreach (var name in LibraryIndex.All)
+        {
+            int match = CompletionMatch.Of(typed, name.Name);
+            if (match is not (CompletionMatch.Exact or CompletionMatch.Prefix or CompletionMatch.PrefixOtherCase)) continue;
+            // A kind is written only in a function's head, which has a completion of its own.
+            if (name.Kind == LibraryNameKind.Kind || aliased.Contains(name.Library) || !seen.Add(name.Name)) continue;
+            if (!edits.TryGetValue(name.Library, out var edit)) edits[name.Library] = edit = UseLineEdit.For(analysis.Result.Syntax, name.Library);
+            var category = name.Kind switch
+            {
+                LibraryNameKind.Function => CompletionCategory.Function,
+                LibraryNameKind.Table => CompletionCategory.Table,
+                LibraryNameKind.Choice => CompletionCategory.Choice,
+                LibraryNameKind.Option => CompletionCategory.Option,
+                _ => CompletionCategory.Definition,
+            };
+            yield return new(name.Name, match, CompletionGroup.Library, 0, new CompletionEntry(name.Name, category, name.Name, replace,
+                Detail: EditingMessages.CompletionFromLibrary(name.Library), AdditionalEdits: [edit]));
+        }
     }
 
     /// <summary>Where a sheet's own name is declared, as a distance from the cursor; names without a place in this sheet rank between those above and those below.</summary>

@@ -102,28 +102,6 @@ internal sealed partial class SheetEvaluator
         }
     }
 
-    /// <summary>
-    /// The edit that adds <c>use LIBRARY</c> to this sheet: after its last import, or else before its
-    /// first statement that is not a heading, a <c>sheet</c> line or a <c>display</c> line.
-    /// </summary>
-    private TextEdit UseLineEdit(string library)
-    {
-        var text = _source.Text;
-        string newline = text.Contains("\r\n", StringComparison.Ordinal) ? "\r\n" : "\n";
-        var lastUse = _statements.LastOrDefault(s => s is UseSyntax);
-        if (lastUse is not null)
-        {
-            int line = _source.GetPosition(lastUse.Span.End).Line;
-            return line + 1 < _source.LineCount
-                ? new TextEdit(new TextSpan(_source.LineStart(line + 1), 0), $"use {library}{newline}")
-                : new TextEdit(new TextSpan(text.Length, 0), $"{newline}use {library}");
-        }
-        var first = _statements.FirstOrDefault(s => s is not (HeadingSyntax or SheetMetadataSyntax or DisplaySyntax));
-        int at = first is null ? text.Length : _source.LineStart(_source.GetPosition(first.Span.Start).Line);
-        bool needsNewlineBefore = at == text.Length && at > 0 && text[at - 1] != '\n';
-        return new TextEdit(new TextSpan(at, 0), needsNewlineBefore ? $"{newline}use {library}{newline}" : $"use {library}{newline}");
-    }
-
     /// <summary>Evaluates an imported sheet in this run's import context (workspace sheets, and library sheets with overrides).</summary>
     private (SheetScope Scope, SheetResult Result) Load(SheetSyntax syntax, IReadOnlyDictionary<string, Value> overrides, string label)
     {

@@ -41,7 +41,7 @@ internal sealed partial class SheetEvaluator
         _importOverrides = importOverrides;
         _scope = new SheetScope(_source.Path, displayName) { SourceText = _source };
         _display = DisplaySettings.Default;
-        _eval = new ExpressionEvaluator(_sink, _scope, _source, () => _currentLine, LastDependencyLine) { UseLine = UseLineEdit };
+        _eval = new ExpressionEvaluator(_sink, _scope, _source, () => _currentLine, LastDependencyLine) { UseLine = library => Library.UseLineEdit.For(_syntax, library) };
     }
 
     public static SheetResult Evaluate(SourceText source, RunOptions options, ImportContext imports) =>

@@ -29,6 +29,7 @@ public sealed class CompletionHandler(ServerContext context) : IRequestHandler<C
                 SortText = i.SortText,
                 FilterText = i.FilterText,
                 TextEdit = new TextEdit { Range = context.Positions.ToRange(analysis.Source, i.Replace), NewText = i.InsertText },
+                AdditionalTextEdits = i.AdditionalEdits?.Select(e => new TextEdit { Range = context.Positions.ToRange(analysis.Source, e.Span), NewText = e.NewText }).ToArray(),
                 Data = i.Key is { } key ? new CompletionItemData { Uri = p.TextDocument.Uri, Category = key.Category.ToString(), Name = key.Name, Alias = key.Alias } : null,
             }).ToArray(),
         };

@@ -15,5 +15,8 @@ public sealed class CompletionItem
     public string? SortText { get; set; }
     public string? FilterText { get; set; }
     public TextEdit? TextEdit { get; set; }
+
+    /// <summary>Edits elsewhere in the document made when the item is chosen (the import of a library name).</summary>
+    public TextEdit[]? AdditionalTextEdits { get; set; }
     public object? Data { get; set; }
 }

@@ -69,7 +69,10 @@ public static class GoldenRenderer
             string detail = i.Detail is not null ? " — " + i.Detail
                 : i.Key is not null && CompletionResolver.Resolve(a, i.Key)?.Detail is { } resolved ? " — " + resolved + " (resolved)"
                 : "";
-            sb.Append($"{i.Label} [{i.Category}]{(i.InsertText != i.Label ? " inserts '" + i.InsertText + "'" : "")}{detail}\n");
+            string also = i.AdditionalEdits is { Count: > 0 } edits
+                ? string.Concat(edits.Select(e => $" + at {Span(a.Source, e.Span)} '{e.NewText.ReplaceLineEndings("⏎")}'"))
+                : "";
+            sb.Append($"{i.Label} [{i.Category}]{(i.InsertText != i.Label ? " inserts '" + i.InsertText + "'" : "")}{detail}{also}\n");
         }
         return sb.ToString();
     }
