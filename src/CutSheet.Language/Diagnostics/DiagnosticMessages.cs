@@ -99,6 +99,9 @@ public static class DiagnosticMessages
         $"'{name}' is imported from {from}; to change an imported input, write it in the import: use {from} with ({name} = …)";
     public static string InLibrary(string name, string library) => $"'{name}' is not defined in this sheet; the library {library} has it: add 'use {library}'";
     public static string AddUseFix(string library) => $"add 'use {library}'";
+    public static string UnknownFunctionInLibrary(string name, string near, string library) =>
+        $"'{name}' is not a function; did you mean '{near}' of the library {library}? (add 'use {library}')";
+    public static string UseLibraryFunctionFix(string near, string library) => $"write {near} and add 'use {library}'";
     public static string ImportedUnderAlias(string name, string library, string alias) =>
         $"'{name}' comes from {library}, imported here as {alias}: write {alias}.{name}";
     public static string QualifyFix(string alias, string name) => $"write {alias}.{name}";

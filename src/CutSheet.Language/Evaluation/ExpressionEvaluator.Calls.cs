@@ -24,7 +24,9 @@ internal sealed partial class ExpressionEvaluator
                 var names = f.Scope.Functions.Keys.Concat(f.Scope.Imported.Where(i => i.Value.Symbol is FunctionSymbol).Select(i => i.Key)).Concat(Builtins.FunctionNames);
                 EvaluateArguments(call, f);
                 if (LibraryHint(call.Callee, f, DiagnosticCodes.UnknownFunction)) return Value.Unknown;
-                return Error(f, DiagnosticCodes.UnknownFunction, call.Callee.Span, DiagnosticMessages.UnknownFunction(call.Callee.FullName, Suggest(call.Callee.Name, names)));
+                var suggestion = Suggest(call.Callee.Name, names);
+                if (suggestion is null && LibraryFunctionNear(call.Callee, f)) return Value.Unknown;
+                return Error(f, DiagnosticCodes.UnknownFunction, call.Callee.Span, DiagnosticMessages.UnknownFunction(call.Callee.FullName, suggestion));
             default:
                 EvaluateArguments(call, f);
                 return Error(f, DiagnosticCodes.NotAFunction, call.Callee.Span, DiagnosticMessages.NotAFunction(call.Callee.FullName));

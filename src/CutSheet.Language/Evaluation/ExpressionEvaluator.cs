@@ -241,6 +241,22 @@ internal sealed partial class ExpressionEvaluator
         return true;
     }
 
+    /// <summary>
+    /// A mistyped function that no name in scope is near, but a function of a library sheet the
+    /// sheet does not import is (<c>lead_angel</c> for <c>lead_angle</c> of <c>screws</c>): suggests
+    /// it, with a fix that corrects the name and adds the <c>use</c> line.
+    /// </summary>
+    private bool LibraryFunctionNear(NameSyntax n, EvalFrame f)
+    {
+        if (n.Qualifier is not null || f.Foreign || UseLine is null) return false;
+        var functions = Library.LibraryIndex.All.Where(l => l.Kind == Library.LibraryNameKind.Function);
+        if (Suggest(n.Name, functions.Select(l => l.Name)) is not { } near || Library.LibraryIndex.LibraryDeclaring(near) is not { } library) return false;
+        if (f.Scope.Namespaces.Values.Any(ns => ns.DisplayName == library)) return false;
+        Error(f, DiagnosticCodes.UnknownFunction, n.Span, DiagnosticMessages.UnknownFunctionInLibrary(n.Name, near, library),
+            new Fix(DiagnosticMessages.UseLibraryFunctionFix(near, library), [new TextEdit(n.Span, near), UseLine(library)]));
+        return true;
+    }
+
     private Value UsedBeforeDefinition(NameSyntax n, DefinitionSymbol d, EvalFrame f)
     {
         int useLine = _currentLine();

@@ -63,6 +63,7 @@ public class DiagnosticMessageCheckTests
         // Names and functions
         new("unknown name", "x = zeta_q\n", DiagnosticCodes.UnknownName, M.UnknownName("zeta_q", null)),
         new("library function not imported", "T = backdrive_torque(F: 1 kN, lead: 5 mm/rev, eta: 0.9)\n", DiagnosticCodes.UnknownFunction, M.InLibrary("backdrive_torque", "ballscrews")),
+        new("library function misspelt, not imported", "lam = lead_angel(lead: 5 mm/rev, d: 16 mm)\n", DiagnosticCodes.UnknownFunction, M.UnknownFunctionInLibrary("lead_angel", "lead_angle", "screws")),
         new("library name under an alias", "use ballscrews as b\nE = E_steel\n", DiagnosticCodes.UnknownName, M.ImportedUnderAlias("E_steel", "ballscrews", "b")),
         new("unknown name with suggestion", "F_rim = 1 N\nx = F_rin\n", DiagnosticCodes.UnknownName, M.UnknownName("F_rin", "F_rim")),
         new("used before definition", "a = b\nb = 1\n", DiagnosticCodes.UsedBeforeDefinition, M.UsedBeforeDefinition("b", 1, 2)),
