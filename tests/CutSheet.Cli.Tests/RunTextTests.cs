@@ -140,6 +140,14 @@ public sealed partial class RunTextTests
     }
 
     [Fact]
+    public void Set_of_a_computed_value_is_refused_at_its_line()
+    {
+        var outcome = CliDriver.Run("run", "demo.cutsheet", "--set", "T=1 N·m");
+        Assert.Equal(1, outcome.ExitCode);
+        Assert.Contains(Lines(outcome), l => l == "demo.cutsheet:6:1: error CUT3011 " + Language.Diagnostics.DiagnosticMessages.SetNotInput("T"));
+    }
+
+    [Fact]
     public void Units_inch_shows_computed_values_in_inch()
     {
         // L = 2 × 25.4 mm = 50.8 mm = 2 in exactly [calc]

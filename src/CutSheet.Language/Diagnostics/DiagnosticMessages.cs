@@ -120,6 +120,10 @@ public static class DiagnosticMessages
     public static string OverrideNotInput(string name, string sheet) => $"'{name}' is not an input of {sheet}; only definitions that depend on no other definition can be overridden";
     public static string OverrideUnknown(string name, string sheet, string? suggestion = null) =>
         suggestion is null ? $"{sheet} has no definition '{name}'" : $"{sheet} has no definition '{name}'; did you mean '{suggestion}'?";
+    public static string SetUnknown(string name, string? suggestion) =>
+        suggestion is null ? $"--set {name}: the sheet has no definition '{name}'" : $"--set {name}: the sheet has no definition '{name}'; did you mean '{suggestion}'?";
+    public static string SetNotInput(string name) =>
+        $"--set {name}: '{name}' is not an input of the sheet; only definitions that depend on no other definition can be set";
     public static string OverrideDimension(string name, Dimension own, Dimension given) =>
         $"the sheet gives '{name}' as {Kinds.Describe(own)} ({own.ToSiString()}); the value set is {Kinds.Describe(given)} ({given.ToSiString()}), so it cannot stand in";
     public static string OverrideValueKind(string name, string own, string given) =>

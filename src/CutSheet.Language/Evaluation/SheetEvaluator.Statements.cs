@@ -35,7 +35,7 @@ internal sealed partial class SheetEvaluator
         foreach (var name in overrides.Keys)
         {
             if (!_scope.Definitions.ContainsKey(name))
-                _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, new TextSpan(0, 0), DiagnosticMessages.OverrideUnknown(name, _scope.DisplayName, InputNear(name))));
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, new TextSpan(0, 0), DiagnosticMessages.SetUnknown(name, InputNear(name))));
         }
         return results;
     }

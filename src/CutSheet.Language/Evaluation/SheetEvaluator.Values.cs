@@ -36,7 +36,7 @@ internal sealed partial class SheetEvaluator
         {
             if (!symbol.IsInput)
             {
-                _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, d.NameSpan, DiagnosticMessages.OverrideNotInput(d.Name, _scope.DisplayName)));
+                _sink.Report(Diagnostic.Error(DiagnosticCodes.OverrideNotInput, d.NameSpan, DiagnosticMessages.SetNotInput(d.Name)));
             }
             else
             {
