@@ -264,6 +264,7 @@ internal static class Builtins
         var values = new List<double>();
         Dimension dim = default;
         Kind? tag = null;
+        string first = "";
         for (int i = 0; i < args.Length; i++)
         {
             var a = args[i];
@@ -276,11 +277,15 @@ internal static class Builtins
                 problem = (DiagnosticCodes.TypeMismatch, call.Arguments[i].Value.Span, DiagnosticMessages.TypeMismatch("a quantity", a.Describe()));
                 return Value.Unknown;
             }
-            if (i == 0) dim = d;
+            if (i == 0)
+            {
+                dim = d;
+                first = Operand(a);
+            }
             else if (!d.SiEquals(dim))
             {
                 problem = (DiagnosticCodes.DimensionMismatch, call.Arguments[i].Value.Span,
-                    DiagnosticMessages.DimensionMismatch("compare", Kinds.Describe(dim), dim, Kinds.Describe(d), d));
+                    DiagnosticMessages.DimensionMismatch("compare", first, dim, Operand(a), d));
                 return Value.Unknown;
             }
             values.AddRange(xs);
@@ -329,6 +334,15 @@ internal static class Builtins
         }
         list = args[i].List!;
         return true;
+    }
+
+    /// <summary>An argument as a message names it: "a value in mm", "a list in kN", "a plain number".</summary>
+    private static string Operand(Value v)
+    {
+        bool list = v.Kind == ValueKind.List;
+        var q = list ? new Quantity(v.List!.Values.FirstOrDefault(), v.List.Dimension, v.List.Tag) : v.Quantity;
+        string? unit = Display.DisplayUnits.Choose(q.Si, q.Dimension, q.Tag, Display.UnitSystem.Metric)?.Text;
+        return unit is null ? (list ? "a list of plain numbers" : "a plain number") : $"{(list ? "a list" : "a value")} in {unit}";
     }
 
     private static string Describe(Quantity q) =>

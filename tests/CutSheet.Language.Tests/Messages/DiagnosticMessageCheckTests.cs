@@ -56,6 +56,7 @@ public class DiagnosticMessageCheckTests
         new("per revolution times angle", "P_h = 5 mm/rev\ntheta = 90 deg\nx = P_h * theta as mm\n", DiagnosticCodes.PerRevTimesAngle, M.PerRevTimesAngle),
         new("override of another dimension", "use ballscrews with (E_steel = 206 mm)\n", DiagnosticCodes.OverrideMismatch,
             M.OverrideDimension("E_steel", Dimension.FromSi(-1, 1, -2), L)),
+        new("min of a length and a force", "S = min(1 mm, 2 N)\n", DiagnosticCodes.DimensionMismatch, M.DimensionMismatch("compare", "a value in mm", L, "a value in N", Force)),
         new("torque shown in J", "T = 10 N·m\nx = T as J\n", DiagnosticCodes.TorqueAsEnergy, M.TorqueAsEnergy),
         // 45 rad = 45 × 180/π degrees = 2578.3° (the SI definition of the radian).
         new("plain number as radians", "x = sin(45)\n", DiagnosticCodes.PlainNumberAsRadians, M.PlainNumberAsRadians("sin", "45", 45 * 180 / Math.PI)),
