@@ -43,6 +43,9 @@ public static class DiagnosticMessages
     public static string UnknownUnitWithSuggestion(string symbol, string suggestion) => $"'{symbol}' is not a known unit; did you mean {suggestion}?";
     public static string OffsetUnitInCompound(string unit) => $"'{unit}' combines a temperature scale with an offset (°C, °F) with other units; write temperature differences in K";
     public static string NameAfterNumber(string name) => $"'{name}' is a name, not a unit; to multiply, write the operator";
+    public static string NameAfterAs(string name, bool isKind, string? example) => isKind
+        ? $"'{name}' is a kind, not a unit; 'as' takes a unit{(example is null ? "" : $", e.g. {example}")}"
+        : $"'{name}' is a name, not a unit; 'as' takes a unit";
     public static string UnitAlsoName(string unit) => $"'{unit}' after a number is read as the unit {unit}, but '{unit}' is also a name in this sheet; to multiply, write the operator";
 
     // Dimensions and kinds

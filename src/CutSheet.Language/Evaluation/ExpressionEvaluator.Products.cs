@@ -237,7 +237,7 @@ internal sealed partial class ExpressionEvaluator
     {
         var v = Evaluate(c.Operand, f);
         var resolution = UnitFacts.Of(c.Unit).Resolution;
-        if (resolution.Unit is null) return UnitError(c.Unit, resolution.Error!, f);
+        if (resolution.Unit is null) return UnitError(c.Unit, resolution.Error!, f, afterAs: true);
         if (v.IsUnknown) return v;
         if (v.Kind is not (ValueKind.Quantity or ValueKind.List)) return TypeError(f, c.Operand.Span, "a quantity", v);
         var unit = resolution.Unit;

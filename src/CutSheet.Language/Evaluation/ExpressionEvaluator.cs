@@ -143,12 +143,21 @@ internal sealed partial class ExpressionEvaluator
         return true;
     }
 
-    private Value UnitError(UnitSyntax unit, UnitError error, EvalFrame f)
+    private Value UnitError(UnitSyntax unit, UnitError error, EvalFrame f, bool afterAs = false)
     {
         var span = new TextSpan(unit.Span.Start + error.Offset, Math.Max(error.Length, 1));
         if (error.Code == DiagnosticCodes.UnknownUnit)
         {
             string symbol = unit.Text.Substring(Math.Min(error.Offset, unit.Text.Length), Math.Min(error.Length, unit.Text.Length - Math.Min(error.Offset, unit.Text.Length)));
+            if (unit.Text == symbol && afterAs && (f.Scope.Find(symbol) is not null || Builtins.Constants.ContainsKey(symbol) || Kinds.Find(symbol) is not null))
+            {
+                // `x as d_0` or `x as torque`: 'as' takes a unit, and there is nothing to multiply.
+                var kind = Kinds.Find(symbol) ?? f.Scope.Kinds.GetValueOrDefault(symbol);
+                // A sheet's own kind is shown in the units of the kind it is declared as.
+                var shown = kind?.Basis ?? kind;
+                string? example = shown is null ? null : DisplayUnits.Choose(1, shown.Dimension, shown.IsTagged ? shown : null, UnitSystem.Metric)?.Text;
+                return Error(f, DiagnosticCodes.NameAfterNumber, unit.Span, DiagnosticMessages.NameAfterAs(symbol, kind is not null, example));
+            }
             if (unit.Text == symbol && (f.Scope.Find(symbol) is not null || Builtins.Constants.ContainsKey(symbol)))
             {
                 return Error(f, DiagnosticCodes.NameAfterNumber, unit.Span, DiagnosticMessages.NameAfterNumber(symbol),

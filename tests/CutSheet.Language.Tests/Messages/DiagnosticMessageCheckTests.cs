@@ -39,6 +39,8 @@ public class DiagnosticMessageCheckTests
 
         // Units and kinds
         new("name after a number", "x = 2 pi\n", DiagnosticCodes.NameAfterNumber, M.NameAfterNumber("pi")),
+        new("a name after as", "d_0 = 5 mm\nx = 2 mm as d_0\n", DiagnosticCodes.NameAfterNumber, M.NameAfterAs("d_0", isKind: false, example: null)),
+        new("a kind after as", "T = 5 N*m as torque\n", DiagnosticCodes.NameAfterNumber, M.NameAfterAs("torque", isKind: true, example: "N·m")),
         new("unit also a name", "W = 200 lbf\nx = 2 W\n", DiagnosticCodes.UnitAlsoName, M.UnitAlsoName("W")),
         new("unit exponent out of range", "x = 1 m^13\n", DiagnosticCodes.MalformedUnit, M.BadUnitExponent(13)),
         new("negative unit exponent out of range", "x = 1 m^-13\n", DiagnosticCodes.MalformedUnit, M.BadUnitExponent(-13)),
