@@ -37,6 +37,24 @@ public sealed class InputTests
     }
 
     [Fact]
+    public void Linked_folders_are_followed_once_and_a_sheet_keeps_its_own_path()
+    {
+        using var dir = new TempDirectory();
+        string sheet = dir.Write("sub/a.cutsheet", "a = 1 mm\n");
+        // A link back up the tree (a cycle) and a second way into sub/.
+        Directory.CreateSymbolicLink(Path.Combine(dir.Path, "sub", "up"), "..");
+        Directory.CreateDirectory(Path.Combine(dir.Path, "other"));
+        Directory.CreateSymbolicLink(Path.Combine(dir.Path, "other", "same"), Path.Combine("..", "sub"));
+        string linkedOnly = dir.Write("elsewhere/b.cutsheet", "b = 1 mm\n");
+        Directory.CreateSymbolicLink(Path.Combine(dir.Path, "sub", "far"), Path.Combine("..", "elsewhere"));
+        // From sub/ and other/: b only through the link far/, and other/same/ is sub/ again.
+        Assert.Equal([sheet, Path.Combine(dir.Path, "sub", "far", "b.cutsheet")],
+            SheetPathExpander.Expand([Path.Combine(dir.Path, "sub"), Path.Combine(dir.Path, "other")], dir.Path));
+        // From the top, every sheet by its own path.
+        Assert.Equal([linkedOnly, sheet], SheetPathExpander.Expand(["."], dir.Path));
+    }
+
+    [Fact]
     public void Only_the_cutsheet_extension_counts_in_directories()
     {
         using var dir = new TempDirectory();

@@ -1,0 +1,65 @@
+using CutSheet.Language.Diagnostics;
+using CutSheet.Language.Evaluation;
+
+namespace CutSheet.Language.Tests.Imports;
+
+/// <summary>
+/// <c>use "path"</c> stays inside the workspace by the path its links resolve to (LANGUAGE.md G):
+/// a linked folder may lead inside, never out, however the links are chained.
+/// </summary>
+public sealed class LinkedImportTests : IDisposable
+{
+    private readonly string _top = Directory.CreateTempSubdirectory("cutsheet-links-").FullName;
+    private readonly string _workspace;
+
+    public LinkedImportTests()
+    {
+        _workspace = Directory.CreateDirectory(Path.Combine(_top, "ws")).FullName;
+        Write("ws/deep/er/data.cutsheet", "d_0 = 16 mm\n");
+        Write("outside/data.cutsheet", "d_0 = 20 mm\n");
+        // ws/alias → ws/deep/er: a link that stays inside.
+        Directory.CreateSymbolicLink(Path.Combine(_workspace, "alias"), Path.Combine("deep", "er"));
+        // ws/out → ../outside: a link straight out.
+        Directory.CreateSymbolicLink(Path.Combine(_workspace, "out"), Path.Combine("..", "outside"));
+        // ws/deep/er/up → ../../../outside, read from the folder the link sits in: out of the workspace,
+        // though reached through ws/alias/up, whose text alone would suggest ws/outside.
+        Directory.CreateSymbolicLink(Path.Combine(_workspace, "deep", "er", "up"), Path.Combine("..", "..", "..", "outside"));
+    }
+
+    [Theory]
+    [InlineData("alias/data.cutsheet", null)]
+    [InlineData("out/data.cutsheet", DiagnosticCodes.ImportOutsideWorkspace)]
+    [InlineData("alias/up/data.cutsheet", DiagnosticCodes.ImportOutsideWorkspace)]
+    [InlineData("deep/er/up/data.cutsheet", DiagnosticCodes.ImportOutsideWorkspace)]
+    public void Links_are_resolved_before_the_workspace_is_checked(string target, string? code)
+    {
+        string sheet = Write("ws/main.cutsheet", $"use \"{target}\"\nx = d_0\n");
+        var result = SheetRunner.Run(File.ReadAllText(sheet), sheet, new RunOptions { WorkspaceRoot = _workspace });
+        var errors = result.Diagnostics.Where(d => d.Severity == Severity.Error).Select(d => d.Code).ToList();
+        if (code is null) Assert.Empty(errors);
+        else Assert.Contains(code, errors);
+    }
+
+    [Fact]
+    public void Real_path_resolves_every_link_along_the_path()
+    {
+        // The same folder reached three ways has one real path.
+        string real = RealPath.Of(Path.Combine(_workspace, "deep", "er"));
+        Assert.Equal(real, RealPath.Of(Path.Combine(_workspace, "alias")));
+        Assert.Equal(RealPath.Of(Path.Combine(_top, "outside")), RealPath.Of(Path.Combine(_workspace, "alias", "up")));
+        Assert.Equal(RealPath.Of(Path.Combine(_top, "outside", "data.cutsheet")), RealPath.Of(Path.Combine(_workspace, "out", "..", "outside", "data.cutsheet")));
+    }
+
+    private string Write(string relative, string text)
+    {
+        string path = Path.Combine(_top, relative);
+        Directory.CreateDirectory(Path.GetDirectoryName(path)!);
+        File.WriteAllText(path, text);
+        return path;
+    }
+
+    public void Dispose()
+    {
+        try { Directory.Delete(_top, recursive: true); } catch (IOException) { }
+    }
+}
