@@ -288,7 +288,10 @@ public static class Tokenizer
         int p = pos;
         while (p < text.Length && IsSpace(text[p])) p++;
         start = end = p;
-        bool reciprocal = afterAs && p + 1 < text.Length && text[p] == '1' && text[p + 1] == '/';
+        // A reciprocal unit, 1/m or 1/min: after 'as', and after a number when a unit follows the slash
+        // (the display writes 14.76 1/m; 2 1/4 in is a mixed number, read with the number before this).
+        bool reciprocal = p + 1 < text.Length && text[p] == '1' && text[p + 1] == '/'
+            && (afterAs || (p + 2 < text.Length && !IsSpace(text[p + 2]) && (text[p + 2] == '(' || UnitStartsAt(text, p + 2))));
         if (!(UnitStartsAt(text, pos) || reciprocal || (afterAs && p < text.Length && text[p] == '('))) return false;
         int parens = 0;
         while (p < text.Length)

@@ -42,6 +42,8 @@ public class DiagnosticMessageCheckTests
         new("a name after as", "d_0 = 5 mm\nx = 2 mm as d_0\n", DiagnosticCodes.NameAfterNumber, M.NameAfterAs("d_0", isKind: false, example: null)),
         new("a kind after as", "T = 5 N*m as torque\n", DiagnosticCodes.NameAfterNumber, M.NameAfterAs("torque", isKind: true, example: "N·m")),
         new("unit also a name", "W = 200 lbf\nx = 2 W\n", DiagnosticCodes.UnitAlsoName, M.UnitAlsoName("W")),
+        new("unknown one-letter unit", "x = 1000 U/min\n", DiagnosticCodes.UnknownUnit, M.UnknownUnit("U")),
+        new("unknown unit near a known one", "x = 3 inchs\n", DiagnosticCodes.UnknownUnit, M.UnknownUnitWithSuggestion("inchs", "inch")),
         new("unit exponent out of range", "x = 1 m^13\n", DiagnosticCodes.MalformedUnit, M.BadUnitExponent(13)),
         new("negative unit exponent out of range", "x = 1 m^-13\n", DiagnosticCodes.MalformedUnit, M.BadUnitExponent(-13)),
         new("add length and mass", "x = 5 mm + 2 kg\n", DiagnosticCodes.DimensionMismatch, M.DimensionMismatch("add", "5 mm", L, "2 kg", Mass)),
