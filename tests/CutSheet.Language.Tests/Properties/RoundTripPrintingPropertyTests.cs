@@ -19,6 +19,8 @@ public partial class RoundTripPrintingPropertyTests
     [
         "m", "mm", "µm", "in", "ft", "thou", "N", "kN", "lbf", "N·m", "lbf·in", "kg", "lb", "s", "min", "rpm", "rad/s", "Hz",
         "deg", "rev", "rad", "mm/rev", "mm/tooth", "kW", "hp", "MPa", "psi", "kg·m²", "lb·in²", "m/s^2", "mm³/s", "%",
+        // Reciprocal units, as the display writes them after a number.
+        "1/m", "1/min", "1/(m·s)",
     ];
 
     /// <summary>
