@@ -273,17 +273,33 @@ internal sealed partial class ExpressionEvaluator
         return Error(f, DiagnosticCodes.UsedBeforeDefinition, n.Span, DiagnosticMessages.UsedBeforeDefinition(n.Name, useLine + 1, d.Line + 1), fix);
     }
 
+    /// <summary>
+    /// The candidate nearest a mistyped name: within a few edits, or else (for names of four or more
+    /// letters) the shortest one that starts with it, then the shortest that contains it, then the
+    /// longest of six or more letters that it contains: <c>self_locking</c> finds
+    /// <c>self_locking_margin</c>, <c>trapezoidal_mean_diameter</c> finds <c>mean_diameter</c>.
+    /// Null when none is near.
+    /// </summary>
     internal static string? Suggest(string name, IEnumerable<string> candidates)
     {
-        string? best = null;
+        string? best = null, prefixed = null, containing = null, contained = null;
         int bestDistance = int.MaxValue;
         foreach (var c in candidates)
         {
+            if (name.Length >= 4 && c.Length > name.Length)
+            {
+                if (c.StartsWith(name, StringComparison.Ordinal)) { if (prefixed is null || c.Length < prefixed.Length) prefixed = c; }
+                else if (c.Contains(name, StringComparison.Ordinal) && (containing is null || c.Length < containing.Length)) containing = c;
+            }
+            else if (c.Length >= 6 && c.Length < name.Length && name.Contains(c, StringComparison.Ordinal) && (contained is null || c.Length > contained.Length))
+            {
+                contained = c;
+            }
             if (c.Length > 64 || Math.Abs(c.Length - name.Length) > 3) continue;
             int d = EditDistance.Compute(name.Length > 64 ? name[..64] : name, c);
             if (d < bestDistance) { bestDistance = d; best = c; }
         }
-        return bestDistance <= Math.Max(1, name.Length / 3) ? best : null;
+        return bestDistance <= Math.Max(1, name.Length / 3) ? best : prefixed ?? containing ?? contained;
     }
 
     /// <summary>Words for an operand in messages: the literal as written, a name with its unit, or the SI unit.</summary>

@@ -67,6 +67,8 @@ public class DiagnosticMessageCheckTests
 
         // Names and functions
         new("unknown name", "x = zeta_q\n", DiagnosticCodes.UnknownName, M.UnknownName("zeta_q", null)),
+        new("function named by the start of another", "use screws\nm = self_locking(d_m: 18 mm, lead: 4 mm/rev, f: 0.1)\n", DiagnosticCodes.UnknownFunction, M.UnknownFunction("self_locking", "self_locking_margin")),
+        new("function whose name contains another", "use screws\nd_2 = trapezoidal_mean_diameter(d: 20 mm, pitch: 4 mm)\n", DiagnosticCodes.UnknownFunction, M.UnknownFunction("trapezoidal_mean_diameter", "mean_diameter")),
         new("library function not imported", "T = backdrive_torque(F: 1 kN, lead: 5 mm/rev, eta: 0.9)\n", DiagnosticCodes.UnknownFunction, M.InLibrary("backdrive_torque", "ballscrews")),
         new("library function misspelt, not imported", "lam = lead_angel(lead: 5 mm/rev, d: 16 mm)\n", DiagnosticCodes.UnknownFunction, M.UnknownFunctionInLibrary("lead_angel", "lead_angle", "screws")),
         new("library name under an alias", "use ballscrews as b\nE = E_steel\n", DiagnosticCodes.UnknownName, M.ImportedUnderAlias("E_steel", "ballscrews", "b")),
