@@ -24,6 +24,12 @@ public static class DiagnosticMessages
     public const string NotAStatement = "a line must define a name (name = …), a function, a check, a caution, a heading or a setting";
     public static string ClauseNotAllowed(string clause, string statement) => $"'{clause}' cannot be written on {statement}";
     public const string UnitWithoutNumber = "a unit is written only after a number or after 'as'";
+    public static string DiameterSign(string sign) =>
+        $"the diameter sign {sign} is not part of a number; write the number alone (a diameter is a length: d = 20 mm)";
+    public static string RemoveFix(string text) => $"remove {text}";
+    public static string SpacedDigits(string written, string joined) =>
+        $"'{written}' groups digits with spaces, which do not join them into one number; write {joined}";
+    public static string SpacedDigitsFix(string joined) => $"write {joined}";
     public const string PlusMinusNotYet = "a tolerance written with ± is not in the language yet; write the typical value and give the range in the line's description";
 
     public static string SideBySide(string first, string second, bool sameDimension) => sameDimension

@@ -21,6 +21,8 @@ public class DiagnosticMessageCheckTests
     [
         // Syntax
         new("unexpected character", "x = 2 § 3\n", DiagnosticCodes.UnexpectedCharacter, M.UnexpectedCharacter("§")),
+        new("diameter sign before a number", "d = Ø20 mm\n", DiagnosticCodes.UnexpectedCharacter, M.DiameterSign("Ø")),
+        new("digits grouped with spaces", "n = 1 500 rpm\n", DiagnosticCodes.UnexpectedToken, M.SpacedDigits("1 500", "1500")),
         new("unexpected token", "sheet 5 \"x\"\n", DiagnosticCodes.UnexpectedToken, M.Unexpected("number 5", "name")),
         new("unterminated string", "x = \"abc\n", DiagnosticCodes.UnterminatedString, M.UnterminatedString),
         new("inch mark", "d = 0.500\"\n", DiagnosticCodes.InchMark, M.InchMark),

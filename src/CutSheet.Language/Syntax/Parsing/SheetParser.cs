@@ -194,6 +194,7 @@ internal static class SheetParser
         }
         if (token.Kind == TokenKind.Number && index >= 2 && tokens[index - 1].Kind == TokenKind.Unit && tokens[index - 2].Kind == TokenKind.Number)
             return SideBySide(source, tokens, index);
+        if (token.Kind == TokenKind.Number && index >= 1 && SpacedDigits(source, tokens, index) is { } spaced) return spaced;
         // Datasheets write tolerances this way; say that they are not taken yet rather than "unexpected".
         if (token.Kind == TokenKind.PlusMinus)
             return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.PlusMinusNotYet);
@@ -215,6 +216,43 @@ internal static class SheetParser
         bool same = a is not null && b is not null && a.Dimension.SiEquals(b.Dimension);
         var fix = same ? new Fix(DiagnosticMessages.SideBySideFix(first, second), [new TextEdit(new TextSpan(number.Start, 0), "+ ")]) : null;
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, TextSpan.FromBounds(number.Start, end.End), DiagnosticMessages.SideBySide(first, second, same), fix);
+    }
+
+    /// <summary>
+    /// <c>1 500</c> or <c>1 000 000</c>: digits grouped with spaces, as SI typesetting and many
+    /// datasheets write them. A space never joins numbers here, so say so and offer the joined number.
+    /// Null when the tokens are not a number followed by groups of three digits.
+    /// </summary>
+    private static Diagnostic? SpacedDigits(SourceText source, ReadOnlySpan<SyntaxToken> tokens, int index)
+    {
+        var first = tokens[index - 1];
+        if (first.Kind != TokenKind.Number || !IsGroup(source, first, leading: true)) return null;
+        int last = index;
+        while (last < tokens.Length && tokens[last].Kind == TokenKind.Number && IsGroup(source, tokens[last], leading: false)
+            && IsBlank(source.Text.AsSpan(tokens[last - 1].End, tokens[last].Start - tokens[last - 1].End)))
+            last++;
+        if (last == index) return null;
+        var span = TextSpan.FromBounds(first.Start, tokens[last - 1].End);
+        string written = source.Slice(span);
+        string joined = string.Concat(written.Where(char.IsAsciiDigit));
+        var edits = new List<TextEdit>();
+        for (int k = index; k < last; k++) edits.Add(new TextEdit(TextSpan.FromBounds(tokens[k - 1].End, tokens[k].Start), ""));
+        return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, TextSpan.FromBounds(tokens[index].Start, tokens[last - 1].End),
+            DiagnosticMessages.SpacedDigits(written, joined), new Fix(DiagnosticMessages.SpacedDigitsFix(joined), edits));
+
+        static bool IsBlank(ReadOnlySpan<char> gap)
+        {
+            foreach (char c in gap) if (!(char.IsWhiteSpace(c) || c is '\u202F' or '\u00A0' or '\u2009')) return false;
+            return gap.Length > 0;
+        }
+
+        // The leading group is one to three digits, each following group exactly three.
+        static bool IsGroup(SourceText source, SyntaxToken t, bool leading)
+        {
+            var text = source.Text.AsSpan(t.Start, t.Length);
+            foreach (char c in text) if (!char.IsAsciiDigit(c)) return false;
+            return leading ? text.Length is >= 1 and <= 3 : text.Length == 3;
+        }
     }
 
     private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment) =>
@@ -243,6 +281,14 @@ internal static class SheetParser
         {
             switch (t.Kind)
             {
+                case TokenKind.Error when source.Text[t.Start] == '⌀':
+                case TokenKind.Identifier when t.Length > 1 && source.Text[t.Start] is 'Ø' or 'ø' && char.IsAsciiDigit(source.Text[t.Start + 1]):
+                    // Ø20 copied from a drawing: Ø reads as a letter, so the whole would be a name.
+                    string sign = source.Text[t.Start].ToString();
+                    diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnexpectedCharacter, new TextSpan(t.Start, 1), DiagnosticMessages.DiameterSign(sign),
+                        new Fix(DiagnosticMessages.RemoveFix(sign), [new TextEdit(new TextSpan(t.Start, 1), "")])));
+                    fatal = true;
+                    break;
                 case TokenKind.Error:
                     diagnostics.Add(Diagnostic.Error(DiagnosticCodes.UnexpectedCharacter, t.Span, DiagnosticMessages.UnexpectedCharacter(source.Slice(t.Span))));
                     fatal = true;
