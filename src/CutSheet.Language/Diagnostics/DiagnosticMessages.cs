@@ -30,6 +30,10 @@ public static class DiagnosticMessages
     public static string SpacedDigits(string written, string joined) =>
         $"'{written}' groups digits with spaces, which do not join them into one number; write {joined}";
     public static string SpacedDigitsFix(string joined) => $"write {joined}";
+    public static string MistypedStatementWord(string word, string meant) =>
+        $"a line must define a name, or start with a statement's word; '{word}' is not one: did you mean '{meant}'?";
+    public static string CheckOperator(string written, string meant) =>
+        written == "=" ? "a check compares with ==, <=, >=, <, > or !=; a single = defines a name: write ==" : $"'{written}' is not a comparison: write {meant}";
     public const string PlusMinusNotYet = "a tolerance written with ± is not in the language yet; write the typical value and give the range in the line's description";
 
     public static string SideBySide(string first, string second, bool sameDimension) => sameDimension

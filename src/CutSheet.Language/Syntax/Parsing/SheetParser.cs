@@ -92,17 +92,18 @@ internal static class SheetParser
             var parser = StatementGrammar.For(first.Kind, second);
             if (parser is null)
             {
-                diagnostics.Add(Diagnostic.Error(DiagnosticCodes.NotAStatement, span, DiagnosticMessages.NotAStatement));
+                diagnostics.Add(NotAStatement(source, tokens, span));
                 return new ErrorStatementSyntax(span);
             }
-            var result = parser(ToTokenList(source, tokens));
-            if (result.HasValue)
+            if (first.Kind == TokenKind.Check && CheckOperatorMistake(source, tokens) is { } mistake)
             {
-                statement = result.Value;
+                diagnostics.Add(mistake);
             }
             else
             {
-                diagnostics.Add(ParseError(source, tokens, result));
+                var result = parser(ToTokenList(source, tokens));
+                if (result.HasValue) statement = result.Value;
+                else diagnostics.Add(ParseError(source, tokens, result));
             }
         }
         statement ??= Recover(source, tokens, span);
@@ -253,6 +254,55 @@ internal static class SheetParser
             foreach (char c in text) if (!char.IsAsciiDigit(c)) return false;
             return leading ? text.Length is >= 1 and <= 3 : text.Length == 3;
         }
+    }
+
+    /// <summary>The words that start a statement, for the suggestion when a line starts with a mistyped one.</summary>
+    private static readonly string[] StatementWords = ["check", "caution", "notice", "warning", "use", "sheet", "display", "choice", "table", "kind"];
+
+    /// <summary>
+    /// A line that is no statement; when its first word is a statement's word mistyped (<c>chek</c>,
+    /// <c>Check</c>), says which, with a fix.
+    /// </summary>
+    private static Diagnostic NotAStatement(SourceText source, ReadOnlySpan<SyntaxToken> tokens, TextSpan span)
+    {
+        var first = tokens[0];
+        if (first.Kind == TokenKind.Identifier && tokens.Length > 1)
+        {
+            string word = source.Slice(first.Span);
+            string? near = StatementWords.FirstOrDefault(w => string.Equals(w, word, StringComparison.OrdinalIgnoreCase))
+                ?? (word.Length >= 3 ? Evaluation.ExpressionEvaluator.Suggest(word, StatementWords) : null);
+            if (near is not null)
+                return Diagnostic.Error(DiagnosticCodes.NotAStatement, first.Span, DiagnosticMessages.MistypedStatementWord(word, near),
+                    new Fix($"write {near}", [new TextEdit(first.Span, near)]));
+        }
+        return Diagnostic.Error(DiagnosticCodes.NotAStatement, span, DiagnosticMessages.NotAStatement);
+    }
+
+    /// <summary>
+    /// <c>check x = 5 mm</c>, <c>check x =&lt; 5 mm</c>, <c>check x &lt; = 5 mm</c>: a comparison written the
+    /// way other notations write it. Null when the check has no such operator.
+    /// </summary>
+    private static Diagnostic? CheckOperatorMistake(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
+    {
+        for (int i = 1; i < tokens.Length; i++)
+        {
+            var t = tokens[i];
+            var next = i + 1 < tokens.Length ? tokens[i + 1] : default;
+            var previous = tokens[i - 1];
+            if (t.Kind != TokenKind.Equals) continue;
+            // "< =" and "> =": the two halves of <= or >= apart.
+            if (previous.Kind is TokenKind.Less or TokenKind.Greater && i > 1)
+                return Mistake(TextSpan.FromBounds(previous.Start, t.End), previous.Kind == TokenKind.Less ? "<=" : ">=");
+            // "=<" and "=>": the halves swapped.
+            if (next.Kind is TokenKind.Less or TokenKind.Greater && next.Start == t.End)
+                return Mistake(TextSpan.FromBounds(t.Start, next.End), next.Kind == TokenKind.Less ? "<=" : ">=");
+            return Mistake(t.Span, "==");
+        }
+        return null;
+
+        Diagnostic Mistake(TextSpan span, string meant) =>
+            Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.CheckOperator(source.Slice(span), meant),
+                new Fix($"write {meant}", [new TextEdit(span, meant)]));
     }
 
     private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment) =>
