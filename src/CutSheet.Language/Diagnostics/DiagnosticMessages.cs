@@ -34,6 +34,10 @@ public static class DiagnosticMessages
         $"a line must define a name, or start with a statement's word; '{word}' is not one: did you mean '{meant}'?";
     public static string CheckOperator(string written, string meant) =>
         written == "=" ? "a check compares with ==, <=, >=, <, > or !=; a single = defines a name: write ==" : $"'{written}' is not a comparison: write {meant}";
+    public static string NamedArgumentEquals(string name) => $"a named argument is written with ':' ({name}: value); '=' defines a name";
+    public const string NamedArgumentFix = "write :";
+    public const string ParameterWithoutKind = "each parameter of a function names its kind: (x: length, F: force)";
+    public const string FunctionWithoutReturnKind = "a function names the kind it returns after its parameters: f(x: length): area = …";
     public const string PlusMinusNotYet = "a tolerance written with ± is not in the language yet; write the typical value and give the range in the line's description";
 
     public static string SideBySide(string first, string second, bool sameDimension) => sameDimension

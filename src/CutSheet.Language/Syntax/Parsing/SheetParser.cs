@@ -196,6 +196,14 @@ internal static class SheetParser
         if (token.Kind == TokenKind.Number && index >= 2 && tokens[index - 1].Kind == TokenKind.Unit && tokens[index - 2].Kind == TokenKind.Number)
             return SideBySide(source, tokens, index);
         if (token.Kind == TokenKind.Number && index >= 1 && SpacedDigits(source, tokens, index) is { } spaced) return spaced;
+        // f(x = 2 mm): a named argument written with '=' (a definition's sign) instead of ':'.
+        if (token.Kind == TokenKind.Equals && index >= 2 && tokens[index - 1].Kind == TokenKind.Identifier && tokens[index - 2].Kind is TokenKind.LParen or TokenKind.Comma)
+        {
+            // The fix writes "name: value", whatever spacing stood around the '='.
+            var gap = index + 1 < tokens.Length ? TextSpan.FromBounds(tokens[index - 1].End, tokens[index + 1].Start) : token.Span;
+            return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.NamedArgumentEquals(source.Slice(tokens[index - 1].Span)),
+                new Fix(DiagnosticMessages.NamedArgumentFix, [new TextEdit(gap, index + 1 < tokens.Length ? ": " : ":")]));
+        }
         // Datasheets write tolerances this way; say that they are not taken yet rather than "unexpected".
         if (token.Kind == TokenKind.PlusMinus)
             return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, token.Span, DiagnosticMessages.PlusMinusNotYet);
@@ -426,7 +434,25 @@ internal static class SheetParser
         {
             return Diagnostic.Error(DiagnosticCodes.UnitWithoutNumber, span, DiagnosticMessages.UnitWithoutNumber);
         }
+        if (at < tokens.Length && FunctionHeadMistake(tokens, at, span) is { } head) return head;
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.Unexpected(Describe(token), expected));
+    }
+
+    /// <summary>
+    /// A function written without the kinds the language asks for: <c>f(x) = …</c> (a parameter
+    /// without its kind) or <c>f(x: length) = …</c> (no return kind). Null for any other mistake.
+    /// </summary>
+    private static Diagnostic? FunctionHeadMistake(ReadOnlySpan<SyntaxToken> tokens, int at, TextSpan span)
+    {
+        if (tokens.Length < 3 || tokens[0].Kind != TokenKind.Identifier || tokens[1].Kind != TokenKind.LParen || at < 2) return null;
+        int close = -1;
+        for (int i = 2; i < tokens.Length; i++) if (tokens[i].Kind == TokenKind.RParen) { close = i; break; }
+        var previous = tokens[at - 1].Kind;
+        if ((close < 0 || at <= close) && tokens[at].Kind is TokenKind.RParen or TokenKind.Comma && previous == TokenKind.Identifier)
+            return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.ParameterWithoutKind);
+        if (at == close + 1 && tokens[at].Kind == TokenKind.Equals)
+            return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.FunctionWithoutReturnKind);
+        return null;
     }
 
     private static string Describe(Token<TokenKind> token) => Describe(token.Kind, token.ToStringValue());
