@@ -38,6 +38,8 @@ public static class DiagnosticMessages
     public const string NamedArgumentFix = "write :";
     public const string ParameterWithoutKind = "each parameter of a function names its kind: (x: length, F: force)";
     public const string FunctionWithoutReturnKind = "a function names the kind it returns after its parameters: f(x: length): area = …";
+    public const string ChoiceCommas = "a choice's options are separated by '|': choice mode = climb | conventional";
+    public const string ChoiceCommasFix = "separate the options with |";
     public const string PlusMinusNotYet = "a tolerance written with ± is not in the language yet; write the typical value and give the range in the line's description";
 
     public static string SideBySide(string first, string second, bool sameDimension) => sameDimension

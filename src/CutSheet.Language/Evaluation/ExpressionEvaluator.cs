@@ -225,7 +225,10 @@ internal sealed partial class ExpressionEvaluator
         var found = scope.Find(n.Name);
         if (found is not null) return found;
         if (Builtins.Constants.TryGetValue(n.Name, out var constant)) return constant;
-        var candidates = scope.OwnSymbols().Select(s => s.Name).Concat(scope.Imported.Keys).Concat(Builtins.Constants.Keys)
+        // The definition being written is never the name meant: `m = c` does not suggest m.
+        int line = _currentLine();
+        var candidates = scope.OwnSymbols().Where(s => s.Symbol is not DefinitionSymbol { Evaluated: false } d || d.Line != line).Select(s => s.Name)
+            .Concat(scope.Imported.Keys).Concat(Builtins.Constants.Keys)
             .Concat(f.Locals?.Keys ?? Enumerable.Empty<string>());
         error = (DiagnosticCodes.UnknownName, DiagnosticMessages.UnknownName(n.Name, Suggest(n.Name, candidates)));
         return null;
@@ -278,6 +281,7 @@ internal sealed partial class ExpressionEvaluator
     /// letters) the shortest one that starts with it, then the shortest that contains it, then the
     /// longest of six or more letters that it contains: <c>self_locking</c> finds
     /// <c>self_locking_margin</c>, <c>trapezoidal_mean_diameter</c> finds <c>mean_diameter</c>.
+    /// A name of one or two letters is only matched in another case (<c>f</c> finds <c>F</c>).
     /// Null when none is near.
     /// </summary>
     internal static string? Suggest(string name, IEnumerable<string> candidates)
@@ -294,6 +298,12 @@ internal sealed partial class ExpressionEvaluator
             else if (c.Length >= 6 && c.Length < name.Length && name.Contains(c, StringComparison.Ordinal) && (contained is null || c.Length > contained.Length))
             {
                 contained = c;
+            }
+            // A name of one or two letters is an edit away from every other short name: only another case counts.
+            if (name.Length < 3)
+            {
+                if (string.Equals(c, name, StringComparison.OrdinalIgnoreCase)) { bestDistance = 0; best = c; }
+                continue;
             }
             if (c.Length > 64 || Math.Abs(c.Length - name.Length) > 3) continue;
             int d = EditDistance.Compute(name.Length > 64 ? name[..64] : name, c);

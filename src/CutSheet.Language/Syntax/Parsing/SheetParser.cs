@@ -99,6 +99,10 @@ internal static class SheetParser
             {
                 diagnostics.Add(mistake);
             }
+            else if (first.Kind == TokenKind.Choice && ChoiceWithCommas(source, tokens) is { } commas)
+            {
+                diagnostics.Add(commas);
+            }
             else
             {
                 var result = parser(ToTokenList(source, tokens));
@@ -311,6 +315,22 @@ internal static class SheetParser
         Diagnostic Mistake(TextSpan span, string meant) =>
             Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.CheckOperator(source.Slice(span), meant),
                 new Fix($"write {meant}", [new TextEdit(span, meant)]));
+    }
+
+    /// <summary><c>choice mode = climb, conventional</c>: options listed with commas instead of <c>|</c>; the fix writes the bars.</summary>
+    private static Diagnostic? ChoiceWithCommas(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
+    {
+        var commas = new List<TextEdit>();
+        bool optionsOnly = tokens.Length >= 5 && tokens[2].Kind == TokenKind.Equals;
+        for (int i = 3; optionsOnly && i < tokens.Length; i++)
+        {
+            var kind = tokens[i].Kind;
+            if (kind == TokenKind.Comma) commas.Add(new TextEdit(TextSpan.FromBounds(tokens[i - 1].End, tokens[i].End), " |"));
+            else if (kind is not (TokenKind.Identifier or TokenKind.Bar)) optionsOnly = false;
+        }
+        if (!optionsOnly || commas.Count == 0) return null;
+        return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, commas[0].Span, DiagnosticMessages.ChoiceCommas,
+            new Fix(DiagnosticMessages.ChoiceCommasFix, commas));
     }
 
     private static StatementSyntax WithDescription(StatementSyntax statement, SourceText source, SyntaxToken comment) =>
