@@ -133,6 +133,10 @@ public static class DiagnosticMessages
     public const string PositionalAfterNamed = "a positional argument cannot follow a named one";
     public static string Recursion(string function) => $"{function} calls itself (directly or through another function); recursion is not allowed";
     public static string ImportNotFound(string target) => $"cannot find the sheet '{target}'";
+    public static string UseWithExtension(string written, string meant) =>
+        $"'{written}' is neither a library's name nor a quoted path: write use {meant}";
+    public static string LibraryQuoted(string name) => $"cannot find the sheet '{name}' in the workspace; the library sheet {name} is written without quotes: use {name}";
+    public static string ImportWithoutExtension(string target) => $"cannot find the sheet '{target}'; a sheet's path ends in .cutsheet: use \"{target}.cutsheet\"";
     public static string ImportOutsideWorkspace(string target) => $"'{target}' is outside the workspace; a sheet may import only sheets inside its workspace";
     public static string ImportCycle(string chain) => $"imports form a cycle: {chain}";
     public static string ImportClash(string name, string first, string second) => $"'{name}' is imported from both {first} and {second}; import one with 'as' to qualify its names";

@@ -47,7 +47,7 @@ internal sealed partial class SheetEvaluator
                 key = path;
                 if (text is null)
                 {
-                    _sink.Report(Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.ImportNotFound(use.Target)));
+                    _sink.Report(WorkspaceSheetNotFound(use, path));
                     continue;
                 }
                 syntax = SheetSyntax.Parse(new SourceText(text, path));
@@ -100,6 +100,21 @@ internal sealed partial class SheetEvaluator
             }
             Register(use, scope, label);
         }
+    }
+
+    /// <summary>
+    /// A quoted path that names no file: when it is a library's name (<c>use "screws"</c>) or lacks
+    /// the extension of a sheet that exists (<c>use "axis"</c>), says so with the fix.
+    /// </summary>
+    private Diagnostic WorkspaceSheetNotFound(UseSyntax use, string path)
+    {
+        if (LibrarySheets.Names.Contains(use.Target))
+            return Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.LibraryQuoted(use.Target),
+                new Fix($"write use {use.Target}", [new TextEdit(use.TargetSpan, use.Target)]));
+        if (!use.Target.EndsWith(".cutsheet", StringComparison.Ordinal) && _options.Sources.Read(path + ".cutsheet") is not null)
+            return Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.ImportWithoutExtension(use.Target),
+                new Fix($"write \"{use.Target}.cutsheet\"", [new TextEdit(use.TargetSpan, $"\"{use.Target}.cutsheet\"")]));
+        return Diagnostic.Error(DiagnosticCodes.ImportNotFound, use.TargetSpan, DiagnosticMessages.ImportNotFound(use.Target));
     }
 
     /// <summary>Evaluates an imported sheet in this run's import context (workspace sheets, and library sheets with overrides).</summary>

@@ -268,6 +268,27 @@ internal static class SheetParser
         }
     }
 
+    /// <summary>
+    /// <c>use screws.cutsheet</c>: a library named with the file extension, or a workspace sheet
+    /// without its quotes. The fix drops the extension of a library and quotes anything else.
+    /// </summary>
+    private static Diagnostic? UseWithExtension(SourceText source, ReadOnlySpan<SyntaxToken> tokens)
+    {
+        if (tokens.Length < 4 || tokens[0].Kind != TokenKind.Use || tokens[1].Kind != TokenKind.Identifier || tokens[2].Kind is not (TokenKind.Dot or TokenKind.Slash)) return null;
+        int end = 2;
+        while (end < tokens.Length && tokens[end].Kind is TokenKind.Dot or TokenKind.Identifier or TokenKind.Slash && tokens[end].Start == tokens[end - 1].End) end++;
+        var span = TextSpan.FromBounds(tokens[1].Start, tokens[end - 1].End);
+        string written = source.Slice(span);
+        string name = source.Slice(tokens[1].Span);
+        bool library = Library.LibrarySheets.Names.Contains(name) && written == name + ".cutsheet";
+        string meant = library ? name : $"\"{written}\"";
+        return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.UseWithExtension(written, meant),
+            new Fix($"write use {meant}", [new TextEdit(span, meant)]));
+    }
+
+    /// <summary>Words other notations use to import, for the suggestion of <c>use</c>.</summary>
+    private static readonly string[] ImportWords = ["import", "include", "load", "using"];
+
     /// <summary>The words that start a statement, for the suggestion when a line starts with a mistyped one.</summary>
     private static readonly string[] StatementWords = ["check", "caution", "notice", "warning", "use", "sheet", "display", "choice", "table", "kind"];
 
@@ -281,7 +302,8 @@ internal static class SheetParser
         if (first.Kind == TokenKind.Identifier && tokens.Length > 1)
         {
             string word = source.Slice(first.Span);
-            string? near = StatementWords.FirstOrDefault(w => string.Equals(w, word, StringComparison.OrdinalIgnoreCase))
+            string? near = (ImportWords.Contains(word.ToLowerInvariant()) ? "use" : null)
+                ?? StatementWords.FirstOrDefault(w => string.Equals(w, word, StringComparison.OrdinalIgnoreCase))
                 ?? (word.Length >= 3 ? Evaluation.ExpressionEvaluator.Suggest(word, StatementWords) : null);
             if (near is not null)
                 return Diagnostic.Error(DiagnosticCodes.NotAStatement, first.Span, DiagnosticMessages.MistypedStatementWord(word, near),
@@ -455,6 +477,7 @@ internal static class SheetParser
             return Diagnostic.Error(DiagnosticCodes.UnitWithoutNumber, span, DiagnosticMessages.UnitWithoutNumber);
         }
         if (at < tokens.Length && FunctionHeadMistake(tokens, at, span) is { } head) return head;
+        if (UseWithExtension(source, tokens) is { } use) return use;
         return Diagnostic.Error(DiagnosticCodes.UnexpectedToken, span, DiagnosticMessages.Unexpected(Describe(token), expected));
     }
 

@@ -4,15 +4,16 @@ using CutSheet.Language.Evaluation;
 namespace CutSheet.Language.Tests.Imports;
 
 /// <summary>
-/// <c>use "path"</c> stays inside the workspace by the path its links resolve to (LANGUAGE.md G):
-/// a linked folder may lead inside, never out, however the links are chained.
+/// <c>use "path"</c> in a workspace of files: it stays inside by the path its links resolve to
+/// (LANGUAGE.md G), a linked folder may lead inside, never out, however the links are chained;
+/// and a path that names no file says what was likely meant.
 /// </summary>
-public sealed class LinkedImportTests : IDisposable
+public sealed class WorkspaceImportTests : IDisposable
 {
     private readonly string _top = Directory.CreateTempSubdirectory("cutsheet-links-").FullName;
     private readonly string _workspace;
 
-    public LinkedImportTests()
+    public WorkspaceImportTests()
     {
         _workspace = Directory.CreateDirectory(Path.Combine(_top, "ws")).FullName;
         Write("ws/deep/er/data.cutsheet", "d_0 = 16 mm\n");
@@ -38,6 +39,18 @@ public sealed class LinkedImportTests : IDisposable
         var errors = result.Diagnostics.Where(d => d.Severity == Severity.Error).Select(d => d.Code).ToList();
         if (code is null) Assert.Empty(errors);
         else Assert.Contains(code, errors);
+    }
+
+    [Theory]
+    [InlineData("deep/er/data")]
+    [InlineData("screws")]
+    public void A_quoted_path_that_names_no_file_says_what_was_likely_meant(string target)
+    {
+        string sheet = Write("ws/main.cutsheet", $"use \"{target}\"\n");
+        var result = SheetRunner.Run(File.ReadAllText(sheet), sheet, new RunOptions { WorkspaceRoot = _workspace });
+        var error = Assert.Single(result.Diagnostics, d => d.Code == DiagnosticCodes.ImportNotFound);
+        Assert.Equal(target == "screws" ? DiagnosticMessages.LibraryQuoted(target) : DiagnosticMessages.ImportWithoutExtension(target), error.Message);
+        Assert.Single(error.Fixes);
     }
 
     [Fact]
