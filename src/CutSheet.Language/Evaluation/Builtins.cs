@@ -264,7 +264,6 @@ internal static class Builtins
         var values = new List<double>();
         Dimension dim = default;
         Kind? tag = null;
-        string first = "";
         for (int i = 0; i < args.Length; i++)
         {
             var a = args[i];
@@ -280,12 +279,11 @@ internal static class Builtins
             if (i == 0)
             {
                 dim = d;
-                first = Operand(a);
             }
             else if (!d.SiEquals(dim))
             {
                 problem = (DiagnosticCodes.DimensionMismatch, call.Arguments[i].Value.Span,
-                    DiagnosticMessages.DimensionMismatch("compare", first, dim, Operand(a), d));
+                    DiagnosticMessages.DimensionMismatch("compare", Operand(args[0]), dim, Operand(a), d));
                 return Value.Unknown;
             }
             values.AddRange(xs);

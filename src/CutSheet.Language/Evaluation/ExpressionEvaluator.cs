@@ -225,13 +225,22 @@ internal sealed partial class ExpressionEvaluator
         var found = scope.Find(n.Name);
         if (found is not null) return found;
         if (Builtins.Constants.TryGetValue(n.Name, out var constant)) return constant;
+        error = (DiagnosticCodes.UnknownName, DiagnosticMessages.UnknownName(n.Name, Suggest(n.Name, Candidates(scope, f))));
+        return null;
+    }
+
+    /// <summary>
+    /// The names a mistyped one may have meant. Apart from <see cref="ResolveName"/> on purpose: its
+    /// lambda captures a local, and a captured local is allocated whenever the method it lives in
+    /// runs, so here it costs only the error path, not every name of every sheet.
+    /// </summary>
+    private IEnumerable<string> Candidates(SheetScope scope, EvalFrame f)
+    {
         // The definition being written is never the name meant: `m = c` does not suggest m.
         int line = _currentLine();
-        var candidates = scope.OwnSymbols().Where(s => s.Symbol is not DefinitionSymbol { Evaluated: false } d || d.Line != line).Select(s => s.Name)
+        return scope.OwnSymbols().Where(s => s.Symbol is not DefinitionSymbol { Evaluated: false } d || d.Line != line).Select(s => s.Name)
             .Concat(scope.Imported.Keys).Concat(Builtins.Constants.Keys)
             .Concat(f.Locals?.Keys ?? Enumerable.Empty<string>());
-        error = (DiagnosticCodes.UnknownName, DiagnosticMessages.UnknownName(n.Name, Suggest(n.Name, candidates)));
-        return null;
     }
 
     /// <summary>
