@@ -30,6 +30,7 @@ public class DiagnosticMessageCheckTests
         new("parted halves in a check", "x = 3 mm\ncheck x < = 5 mm\n", DiagnosticCodes.UnexpectedToken, M.CheckOperator("< =", "<=")),
         new("parameter without its kind", "f(x) = x * 2\n", DiagnosticCodes.UnexpectedToken, M.ParameterWithoutKind),
         new("function without its return kind", "g(x: length) = x * 2\n", DiagnosticCodes.UnexpectedToken, M.FunctionWithoutReturnKind),
+        new("named argument with equals inside a check", "use screws\ncheck lead_angle(lead = 5 mm/rev, d: 16 mm) <= 10 deg\n", DiagnosticCodes.UnexpectedToken, M.NamedArgumentEquals("lead")),
         new("named argument with equals", "use screws\nP_h = lead(pitch = 5 mm)\n", DiagnosticCodes.UnexpectedToken, M.NamedArgumentEquals("pitch")),
         new("choice options with commas", "choice mode = climb, conventional\n", DiagnosticCodes.UnexpectedToken, M.ChoiceCommas),
         new("library named with its extension", "use screws.cutsheet\n", DiagnosticCodes.UnexpectedToken, M.UseWithExtension("screws.cutsheet", "screws")),
